@@ -1,0 +1,2 @@
+// vitest runs server modules outside Next; 'server-only' has no meaning there.
+export {};
