@@ -1,0 +1,86 @@
+/**
+ * Machine records as the app stores and edits them, and the try-a-pose requests.
+ *
+ * A record is the engine's machine model (lib/kinematics/schema.ts) plus what the
+ * shop keeps beside it: the controller dialect (post-processor id) and the head
+ * pivot distance. A head rotary's `point` in a record is measured from the head
+ * pivot (usually [0, 0, 0]); the engine wants it relative to the probe tip, so
+ * `toEngineMachine` adds the pivot distance and the probe length along +Z
+ * (tool axis at all rotaries zero). Millimetres and degrees.
+ */
+import { z } from 'zod';
+import { machineSchema, vec3Schema, directionSchema, type Machine } from '../kinematics/schema';
+
+export const postIdSchema = z
+  .string()
+  .min(1, 'choose a post-processor')
+  .max(40)
+  .regex(/^[a-z0-9][a-z0-9-]*$/, 'a post-processor id is lower-case letters, digits and dashes');
+
+/** What the engineer edits: the whole machine model plus dialect and pivot. */
+export const machineRecordSchema = machineSchema.safeExtend({
+  post: postIdSchema,
+  /** Distance from the spindle gauge line up to the head pivot, mm (0 when there is no head rotary). */
+  headPivotMm: z.number().finite().min(0, 'the pivot distance cannot be negative').max(2000),
+  notes: z.string().max(2000).default(''),
+});
+export type MachineRecordInput = z.input<typeof machineRecordSchema>;
+export type MachineRecord = z.output<typeof machineRecordSchema>;
+
+/** Creating from a preset: the preset id and the new machine's name and dialect. */
+export const createFromPresetSchema = z.object({
+  presetId: z.string().min(1, 'choose a preset').max(60),
+  name: z.string().trim().min(1, 'give the machine a name').max(200),
+  post: postIdSchema,
+});
+export type CreateFromPreset = z.infer<typeof createFromPresetSchema>;
+
+/** Saving an edit: the full record plus the version it was edited from (409 when stale). */
+export const updateMachineSchema = z.object({
+  baseVersion: z.number().int().positive(),
+  machine: machineRecordSchema,
+  message: z.string().trim().max(500).default(''),
+});
+export type UpdateMachine = z.infer<typeof updateMachineSchema>;
+
+const axisValuesSchema = z.record(z.string().regex(/^[XYZABC]$/, 'axis words are X, Y, Z, A, B or C'), z.number().finite());
+
+/** Try a pose, forward: axis values → tip and tool axis in the part frame. */
+export const fkRequestSchema = z.object({
+  axes: axisValuesSchema,
+  probeLengthMm: z.number().finite().min(0).max(1000).default(0),
+});
+export type FkRequest = z.infer<typeof fkRequestSchema>;
+
+/** Try a pose, inverse: tip and tool axis in the part frame → every solution. */
+export const ikRequestSchema = z.object({
+  tip: vec3Schema,
+  axis: directionSchema,
+  previous: axisValuesSchema.optional(),
+  probeLengthMm: z.number().finite().min(0).max(1000).default(0),
+});
+export type IkRequest = z.infer<typeof ikRequestSchema>;
+
+/** The engine's model for a record and a probe length (see the header comment). */
+export function toEngineMachine(record: Pick<MachineRecord, 'name' | 'rotaries' | 'linear' | 'setup' | 'headPivotMm'>, probeLengthMm: number): Machine {
+  const lift = record.headPivotMm + probeLengthMm;
+  return {
+    name: record.name,
+    linear: record.linear,
+    setup: record.setup,
+    rotaries: record.rotaries.map((r) =>
+      r.carrier === 'head' ? { ...r, point: [r.point[0], r.point[1], r.point[2] + lift] } : { ...r },
+    ),
+  };
+}
+
+/** Words a person reads for a rotary's layout, e.g. "C on the table, about +Z". */
+export function describeRotary(r: { name: string; carrier: 'table' | 'head'; direction: readonly number[] }): string {
+  const [x = 0, y = 0, z = 0] = r.direction;
+  const n = Math.hypot(x, y, z) || 1;
+  const names = ['X', 'Y', 'Z'] as const;
+  const comps = [x / n, y / n, z / n];
+  const main = comps.findIndex((c) => Math.abs(Math.abs(c) - 1) < 1e-9);
+  const about = main >= 0 ? `${(comps[main] ?? 0) > 0 ? '+' : '−'}${names[main]}` : `(${comps.map((c) => c.toFixed(3)).join(', ')})`;
+  return `${r.name} on the ${r.carrier}, about ${about}`;
+}
