@@ -10,7 +10,8 @@ export type FitErrorCode =
   | 'COLLINEAR_POINTS'
   | 'COPLANAR_POINTS'
   | 'NOT_FINITE'
-  | 'NO_CONVERGENCE';
+  | 'NO_CONVERGENCE'
+  | 'UNSUPPORTED_METHOD';
 
 /** A degenerate or impossible fit: typed, with a message in words (never NaN). */
 export class FitError extends Error {
