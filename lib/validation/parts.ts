@@ -15,6 +15,7 @@ import {
 export const recordIdSchema = z.string().trim().min(1, 'an id is required').max(64);
 
 export const partHeaderSchema = z.object({
+  name: z.string().trim().min(1, 'give the part a name').max(200),
   number: z.string().trim().min(1, 'give the part number').max(100),
   revision: z.string().trim().min(1, 'give the drawing revision').max(20),
   material: z.string().trim().max(60).default(''),

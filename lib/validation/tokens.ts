@@ -10,8 +10,6 @@ export const tokenPattern = /^prb_[A-Za-z0-9_-]{43}$/;
 
 export const createTokenSchema = z.object({
   name: z.string().trim().min(1, 'name the token (what script uses it)').max(80),
-  /** Days until it expires; null never expires. */
-  expiresInDays: z.number().int().min(1, 'at least one day').max(366, 'at most a year').nullable().default(90),
 });
 export type CreateTokenInput = z.input<typeof createTokenSchema>;
 export type CreateToken = z.output<typeof createTokenSchema>;

@@ -73,7 +73,7 @@ describe('probes', () => {
 
 describe('parts', () => {
   it('needs a part number and revision', () => {
-    expect(fieldOf(partHeaderSchema.safeParse({ number: '', revision: 'B' }))).toEqual(['number']);
+    expect(fieldOf(partHeaderSchema.safeParse({ name: 'Demo bracket', number: '', revision: 'B' }))).toEqual(['number']);
   });
 
   it('takes a feature without uuid and keeps the slot rule', () => {
@@ -113,6 +113,6 @@ describe('programs and tokens', () => {
     expect(bearerToken(`Basic ${token}`)).toBeNull();
     expect(bearerToken('Bearer prb_short')).toBeNull();
     expect(bearerToken(null)).toBeNull();
-    expect(createTokenSchema.parse({ name: 'nightly' }).expiresInDays).toBe(90);
+    expect(createTokenSchema.safeParse({ name: '  ' }).success).toBe(false);
   });
 });
