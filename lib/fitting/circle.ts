@@ -8,7 +8,8 @@ import { fitPlaneFlat } from './line-plane';
 import { levenbergMarquardt, type LmProblem } from './lm';
 import { toFlat } from './scatter';
 import { FitError, assertFinitePoints, summarise, type CircleFit, type SolverReport } from './types';
-import { addScaled, completeFrame, type Vec3 } from './vec3';
+import { completeFrame } from './frame';
+import { addScaled, type Vec3 } from '../geometry/vec3';
 
 export interface Circle2Fit { circle: Circle2; report: SolverReport; residuals: Float64Array }
 

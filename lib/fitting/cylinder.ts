@@ -10,7 +10,8 @@ import { kasaCircle } from './algebraic';
 import { levenbergMarquardt, type LmProblem } from './lm';
 import { principalAxes, scatterFlat, toFlat } from './scatter';
 import { FitError, assertFinitePoints, summarise, type CylinderFit } from './types';
-import { addScaled, completeFrame, dot, normalize, sub, type Vec3 } from './vec3';
+import { completeFrame } from './frame';
+import { addScaled, dot, normalize, sub, type Vec3 } from '../geometry/vec3';
 
 interface CylState { p0: Vec3; u: Vec3; r: number }
 

@@ -10,7 +10,7 @@ import { fitLine, fitPlane } from './line-plane';
 import { minimumZoneCircle, minimumZonePlane, type MinimumZoneCircle, type MinimumZonePlane } from './minimum-zone';
 import { fitSphere } from './sphere';
 import { FitError, type AnyFit, type FitMethod } from './types';
-import type { Vec3 } from './vec3';
+import type { Vec3 } from '../geometry/vec3';
 
 export type Shape = AnyFit['shape'];
 

@@ -5,7 +5,7 @@
  */
 import { principalAxes, scatterFlat, toFlat, type Scatter } from './scatter';
 import { FitError, assertFinitePoints, summarise, type LineFit, type PlaneFit } from './types';
-import { cross, dot, norm, sub, type Vec3 } from './vec3';
+import { cross, dot, norm, sub, type Vec3 } from '../geometry/vec3';
 
 /** Relative size of an eigenvalue (to the largest) below which the spread is taken as zero. */
 const DEGENERATE_RATIO = 1e-20;

@@ -52,6 +52,7 @@ export function levenbergMarquardt<S>(problem: LmProblem<S>, start: S, options: 
     const qr = householderQr(jac, r, m, n);
     condition = conditionOfR(qr.r, n);
     rank = qr.rank;
+    if (rank < n) { stopReason = 'rank-deficient'; break; }
     let accepted = false;
     let stepNorm = 0;
     let newCost = cost;
@@ -79,7 +80,7 @@ export function levenbergMarquardt<S>(problem: LmProblem<S>, start: S, options: 
   return {
     state,
     cost,
-    report: { iterations, converged: stopReason !== 'max-iterations', stopReason, condition, rank },
+    report: { iterations, converged: stopReason !== 'max-iterations' && stopReason !== 'rank-deficient', stopReason, condition, rank },
   };
 }
 

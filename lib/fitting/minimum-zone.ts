@@ -13,7 +13,8 @@
  */
 import type { CircleFit, PlaneFit } from './types';
 import { FitError } from './types';
-import { completeFrame, cross, dot, norm, sub, type Vec3 } from './vec3';
+import { completeFrame } from './frame';
+import { cross, dot, norm, sub, type Vec3 } from '../geometry/vec3';
 
 export interface MinimumZonePlane {
   method: 'minimum-zone';

@@ -5,7 +5,7 @@
  * (Shakarji, J. Res. NIST 103 (1998) §3: centroid plus singular vectors).
  */
 import { symmetricEigen } from './linalg';
-import type { Vec3 } from './vec3';
+import type { Vec3 } from '../geometry/vec3';
 
 export interface Scatter {
   count: number;

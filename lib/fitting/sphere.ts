@@ -7,7 +7,7 @@ import { algebraicSphere, type Sphere4 } from './algebraic';
 import { levenbergMarquardt, type LmProblem } from './lm';
 import { principalAxes, scatterFlat, toFlat } from './scatter';
 import { FitError, assertFinitePoints, summarise, type SphereFit } from './types';
-import type { Vec3 } from './vec3';
+import type { Vec3 } from '../geometry/vec3';
 
 export function fitSphere(points: readonly Vec3[]): SphereFit {
   assertFinitePoints(points, 4, 'sphere');

@@ -2,7 +2,7 @@
  * Result types shared by every fit. Distances are signed: positive outside the fitted
  * element (away from a circle's or cylinder's axis, along a plane's normal).
  */
-import type { Vec3 } from './vec3';
+import type { Vec3 } from '../geometry/vec3';
 
 export type FitErrorCode =
   | 'TOO_FEW_POINTS'
@@ -37,7 +37,8 @@ export type StopReason =
   | 'small-step'
   | 'small-cost-change'
   | 'zero-residual'
-  | 'max-iterations';
+  | 'max-iterations'
+  | 'rank-deficient';
 
 export interface SolverReport {
   iterations: number;

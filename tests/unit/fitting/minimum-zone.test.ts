@@ -7,7 +7,7 @@ import { describe, expect, it } from 'vitest';
 import { fitShape } from '@/lib/fitting/fit-shape';
 import { fitCircle } from '@/lib/fitting/circle';
 import { fitPlane } from '@/lib/fitting/line-plane';
-import type { Vec3 } from '@/lib/fitting/vec3';
+import type { Vec3 } from '@/lib/geometry/vec3';
 import { createRng } from '@/lib/evaluation/prng';
 
 function gridWidthPlane(points: Vec3[]): number {

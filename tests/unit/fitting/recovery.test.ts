@@ -9,7 +9,8 @@ import { fitShape } from '@/lib/fitting/fit-shape';
 import { fitLine, fitPlane } from '@/lib/fitting/line-plane';
 import { fitSphere } from '@/lib/fitting/sphere';
 import { FitError } from '@/lib/fitting/types';
-import { addScaled, completeFrame, cross, dot, normalize, type Vec3 } from '@/lib/fitting/vec3';
+import { addScaled, cross, dot, normalize, type Vec3 } from '@/lib/geometry/vec3';
+import { completeFrame } from '@/lib/fitting/frame';
 import { createRng } from '@/lib/evaluation/prng';
 
 const sigma = 0.001;
