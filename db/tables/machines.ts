@@ -72,6 +72,10 @@ export const probeCalibrations = mysqlTable('probe_calibrations', {
   repeatability2SigmaMm: double('repeatability_2sigma_mm'),
   /** Ring or sphere used, its certificate, and so on. */
   reference: varchar('reference', { length: 200 }),
+  /** The calibration artifact's certificate number. */
+  certificate: varchar('certificate', { length: 120 }),
+  /** Feed of the calibration touches, mm/min (it should match the measuring feed). */
+  feedMmPerMin: double('feed_mm_per_min'),
   note: varchar('note', { length: 500 }),
   recordedBy: ref('recorded_by').references(() => users.id),
   createdAt: createdAt(),
