@@ -9,15 +9,13 @@
 import { cross, distance, dot, norm, type Vec3 } from '../geometry/vec3';
 import type { Plan, TouchPoint } from './plan-schema';
 
-export interface Feeds {
-  fastFeedMmPerMin: number;
-  measureFeedMmPerMin: number;
-}
-
 export interface DiffSide {
   plan: Plan;
-  /** The probe's feeds the program was generated with; compared when both sides have them. */
-  feeds?: Feeds;
+  /**
+   * Feed words (mm/min) of the moves measuring each touch point, by UUID, in program
+   * order (from lib/program/diff-lines.ts); compared where both sides have a point's feeds.
+   */
+  feeds?: Record<string, number[]>;
 }
 
 export interface DiffTolerances {
@@ -38,7 +36,7 @@ export type PointChange =
   | { kind: 'moved'; distanceMm: number; from: Vec3; to: Vec3 }
   | { kind: 'direction'; angleDeg: number; from: Vec3; to: Vec3 }
   | { kind: 'approach'; distanceMm: number; from: Vec3; to: Vec3 }
-  | { kind: 'feeds'; from: Feeds; to: Feeds }
+  | { kind: 'feeds'; from: number[]; to: number[] }
   | { kind: 'rotary'; axes: { word: string; from: number | null; to: number | null }[] }
   | { kind: 'order'; from: number; to: number };
 
@@ -85,8 +83,8 @@ function rotaryChanges(a: TouchPoint, b: TouchPoint, tol: number): { word: strin
   return out;
 }
 
-function feedsDiffer(a: Feeds, b: Feeds, tol: number): boolean {
-  return Math.abs(a.fastFeedMmPerMin - b.fastFeedMmPerMin) > tol || Math.abs(a.measureFeedMmPerMin - b.measureFeedMmPerMin) > tol;
+function feedsDiffer(a: number[], b: number[], tol: number): boolean {
+  return a.length !== b.length || a.some((f, i) => !(Math.abs(f - (b[i] ?? NaN)) <= tol));
 }
 
 function pointChanges(a: TouchPoint, b: TouchPoint, before: DiffSide, after: DiffSide, tol: DiffTolerances): PointChange[] {
@@ -99,9 +97,9 @@ function pointChanges(a: TouchPoint, b: TouchPoint, before: DiffSide, after: Dif
   if (moved <= tol.distanceMm && angle <= tol.angleDeg && startMoved > tol.distanceMm) {
     changes.push({ kind: 'approach', distanceMm: startMoved, from: a.start, to: b.start });
   }
-  if (before.feeds && after.feeds && feedsDiffer(before.feeds, after.feeds, tol.feedMmPerMin)) {
-    changes.push({ kind: 'feeds', from: before.feeds, to: after.feeds });
-  }
+  const feedsA = before.feeds?.[a.uuid];
+  const feedsB = after.feeds?.[b.uuid];
+  if (feedsA && feedsB && feedsDiffer(feedsA, feedsB, tol.feedMmPerMin)) changes.push({ kind: 'feeds', from: feedsA, to: feedsB });
   const rot = rotaryChanges(a, b, tol.rotaryDeg);
   if (rot.length > 0) changes.push({ kind: 'rotary', axes: rot });
   return changes;

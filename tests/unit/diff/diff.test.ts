@@ -53,11 +53,11 @@ describe('diffPlans', () => {
 
   it('reports rotary positions and feeds', () => {
     const d = diffPlans(
-      { plan: plan(tp(1, 0, [0, 0, 0], [0, 0, 1], { X: 0, Y: 0, Z: 0, A: 0, C: 0 })), feeds: { fastFeedMmPerMin: 500, measureFeedMmPerMin: 50 } },
-      { plan: plan(tp(1, 0, [0, 0, 0], [0, 0, 1], { X: 0, Y: 0, Z: 0, A: 0, C: 180 })), feeds: { fastFeedMmPerMin: 500, measureFeedMmPerMin: 30 } },
+      { plan: plan(tp(1, 0, [0, 0, 0], [0, 0, 1], { X: 0, Y: 0, Z: 0, A: 0, C: 0 })), feeds: { [u(1)]: [500, 50] } },
+      { plan: plan(tp(1, 0, [0, 0, 0], [0, 0, 1], { X: 0, Y: 0, Z: 0, A: 0, C: 180 })), feeds: { [u(1)]: [500, 30] } },
     );
     expect(d.rows[0]?.changes).toEqual([
-      { kind: 'feeds', from: { fastFeedMmPerMin: 500, measureFeedMmPerMin: 50 }, to: { fastFeedMmPerMin: 500, measureFeedMmPerMin: 30 } },
+      { kind: 'feeds', from: [500, 50], to: [500, 30] },
       { kind: 'rotary', axes: [{ word: 'C', from: 0, to: 180 }] },
     ]);
     expect(d.summary).toMatchObject({ changed: 1, byKind: { feeds: 1, rotary: 1 } });
