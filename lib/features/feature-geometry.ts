@@ -1,0 +1,88 @@
+/**
+ * Geometry of a nominal feature in the part frame P (mm): its local frame, top, extent
+ * and the free space inside a bore or slot.
+ *
+ * Local frame: `n` = the feature's axis (a plane's normal), unit, out of the material
+ * toward the probe; `e1` = the reference direction in the plane ⟂ n (a plane's uDir,
+ * a slot's or web's widthDir, else part X projected — see `perpendicular`); e2 = n × e1
+ * (right-handed). Heights are measured along n.
+ */
+import { addScaled, cross, dot, normalize, norm, perpendicular, reject, type Vec3 } from '../geometry/vec3';
+import type { Feature } from './schema';
+
+export interface FeatureFrame { n: Vec3; e1: Vec3; e2: Vec3 }
+
+export function featureAxis(f: Feature): Vec3 {
+  return normalize(f.type === 'plane' ? f.normal : f.axis);
+}
+
+export function featureFrame(f: Feature): FeatureFrame {
+  const n = featureAxis(f);
+  let ref: Vec3 | undefined;
+  if (f.type === 'plane') ref = f.uDir;
+  else if (f.type === 'slot' || f.type === 'web') ref = f.widthDir;
+  let e1 = ref ? reject(ref, n) : perpendicular(n);
+  if (norm(e1) < 1e-9) e1 = perpendicular(n);
+  e1 = normalize(e1);
+  return { n, e1, e2: cross(n, e1) };
+}
+
+/** The feature's reference point on its axis: a plane's origin, a sphere's centre, else `center` (top). */
+export const featureOrigin = (f: Feature): Vec3 => (f.type === 'plane' ? f.origin : f.center);
+
+/** Highest nominal point of the feature along its own axis (the top face / edge / pole). */
+export function featureTop(f: Feature): Vec3 {
+  if (f.type === 'sphere') return addScaled(f.center, featureAxis(f), f.diameter / 2);
+  return featureOrigin(f);
+}
+
+/** Interior features (bore, slot): the probe works inside them, where straight moves between starts stay clear. */
+export const isInterior = (f: Feature): boolean => f.type === 'bore' || f.type === 'slot';
+
+/** A sphere enclosing the nominal feature (centre, radius): the part envelope is built from these. */
+export function boundingSphere(f: Feature): { c: Vec3; r: number } {
+  const n = featureAxis(f);
+  switch (f.type) {
+    case 'plane': return { c: f.origin, r: Math.hypot(f.size[0], f.size[1]) / 2 };
+    case 'sphere': return { c: f.center, r: f.diameter / 2 };
+    case 'bore': return { c: addScaled(f.center, n, -f.depth / 2), r: Math.hypot(f.diameter / 2, f.depth / 2) };
+    case 'boss': return { c: addScaled(f.center, n, -f.height / 2), r: Math.hypot(f.diameter / 2, f.height / 2) };
+    case 'slot':
+    case 'web': return { c: addScaled(f.center, n, -f.depth / 2), r: Math.hypot(f.length / 2, f.width / 2, f.depth / 2) };
+  }
+}
+
+/**
+ * Whether part-frame point `p` (a stylus-ball centre) is in the free space of an interior
+ * feature: inside the bore or slot shrunk by the ball radius `r` (plus `tol`), at any
+ * height above its floor. Exterior features have no such space (false).
+ */
+export function inFreeSpace(f: Feature, frame: FeatureFrame, p: Vec3, r: number, tol: number): boolean {
+  if (f.type !== 'bore' && f.type !== 'slot') return false;
+  const d = [p[0] - f.center[0], p[1] - f.center[1], p[2] - f.center[2]] as Vec3;
+  const h = dot(d, frame.n);
+  if (f.type === 'bore') {
+    if (h < -f.depth + r - tol) return false;
+    const radial = norm(addScaled(d, frame.n, -h));
+    return radial <= f.diameter / 2 - r + tol;
+  }
+  if (h < -f.depth + r - tol) return false;
+  const w = Math.abs(dot(d, frame.e1));
+  const l = Math.abs(dot(d, frame.e2));
+  if (w > f.width / 2 - r + tol) return false;
+  if (l <= f.length / 2 - f.width / 2) return true;
+  // rounded ends (conservative for square ends too)
+  return Math.hypot(w, l - (f.length / 2 - f.width / 2)) <= f.width / 2 - r + tol;
+}
+
+/** Canonical text of a feature's geometry (fixed key order, no label or planning options). */
+export function geometryKey(f: Feature): string {
+  switch (f.type) {
+    case 'plane': return JSON.stringify([f.type, f.origin, f.normal, f.uDir, f.size]);
+    case 'bore': return JSON.stringify([f.type, f.center, f.axis, f.diameter, f.depth]);
+    case 'boss': return JSON.stringify([f.type, f.center, f.axis, f.diameter, f.height]);
+    case 'slot':
+    case 'web': return JSON.stringify([f.type, f.center, f.axis, f.widthDir, f.width, f.length, f.depth]);
+    case 'sphere': return JSON.stringify([f.type, f.center, f.axis, f.diameter]);
+  }
+}

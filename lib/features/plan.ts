@@ -1,0 +1,178 @@
+/**
+ * Touch-point planning (spec/engine-cli.md, "plan"): features → ordered touch points with
+ * machine axes. Part frame P, mm; rotary angles in degrees.
+ *
+ * Order: features are grouped by tool axis; groups are taken greedily by least rotary
+ * travel from the angles in effect (starting from all rotaries at 0); inside a group,
+ * features follow a nearest-neighbour chain over their entry points as seen along the
+ * tool axis; inside a feature, its contacts' own order (contacts.ts). A feature whose
+ * orientation or any path point cannot be reached is left out with a warning naming it.
+ */
+import { addScaled, cross, dot, GeometryError, normalize, perpendicular, type Vec3 } from '../geometry/vec3';
+import { prepareMachine, type PreparedMachine } from '../kinematics/machine';
+import { linearAxesFor, solveOrientation, solutionsFor, type OrientationResult } from '../kinematics/inverse';
+import type { AxisValues } from '../kinematics/schema';
+import type { Plan, PlanWarning, TouchPoint } from '../program/plan-schema';
+import type { Feature } from './schema';
+import type { PlanInput } from './plan-input';
+import { characteristicsByFeature } from './counts';
+import { planContacts, type Contact } from './contacts';
+import { featureAxis, geometryKey } from './feature-geometry';
+import { featureClearance, probeRadius, safeHeight } from './clearance';
+import { featurePath, pathPoints } from './path';
+import { nearestNeighbourOrder } from './patterns';
+import { touchPointUuid } from './touch-point-uuid';
+
+interface Planned { f: Feature; axis: Vec3; contacts: Contact[]; starts: Vec3[] }
+interface Group { axis: Vec3; items: Planned[] }
+
+const axisKey = (a: Vec3): string => a.map((v) => (Math.abs(v) < 5e-10 ? 0 : v).toFixed(9)).join(',');
+
+export function planProgram(input: PlanInput): Plan {
+  const { part, probe } = input;
+  const pm = prepareMachine(input.machine);
+  const r = probeRadius(probe);
+  const chars = characteristicsByFeature(part);
+  const warnings: PlanWarning[] = [];
+  const warn = (f: Feature, code: string, message: string) => warnings.push({ featureUuid: f.uuid, label: f.label, code, message });
+  const groups = new Map<string, Group>();
+  for (const f of part.features) {
+    const res = planContacts(f, { part, r, approach: probe.approach, characteristics: chars.get(f.uuid) ?? new Set() });
+    for (const n of res.notes) warn(f, n.code, n.message);
+    if (res.fault) { warn(f, res.fault.code, `${res.fault.message}; feature not planned`); continue; }
+    const axis = featureAxis(f);
+    const starts = res.contacts.map((c) => addScaled(c.surface, c.normal, r + probe.approach));
+    const key = axisKey(axis);
+    const g = groups.get(key) ?? { axis, items: [] };
+    g.items.push({ f, axis, contacts: res.contacts, starts });
+    groups.set(key, g);
+  }
+  const touchPoints: TouchPoint[] = [];
+  let current: AxisValues = Object.fromEntries(pm.rotaries.map((x) => [x.name, 0]));
+  const left = [...groups.values()];
+  while (left.length > 0) {
+    const { index, orientation } = nextGroup(pm, left, current);
+    const g = left.splice(index, 1)[0] as Group;
+    if (!orientation.ok) {
+      for (const it of g.items) warn(it.f, orientation.code, `${it.f.label}: ${orientation.message}; feature not planned`);
+      continue;
+    }
+    const safeH = safeHeight(part, probe, g.axis);
+    for (const it of orderInGroup(g)) {
+      const clearance = featureClearance(it.f, part, probe);
+      const picked = pickRotaries(pm, it, orientation.value, current, featurePath(it.f, it.starts, clearance, g.axis, safeH));
+      if (!picked.ok) { warn(it.f, picked.code, `${it.f.label}: ${picked.message}; feature not planned`); continue; }
+      current = picked.value;
+      emitPoints(it, r, probe.overtravel, pm, current, touchPoints);
+    }
+  }
+  return { touchPoints, warnings };
+}
+
+type Outcome<T> = { ok: true; value: T } | { ok: false; code: string; message: string };
+
+const failure = (e: unknown): { ok: false; code: string; message: string } => {
+  if (e instanceof GeometryError) return { ok: false, code: e.code, message: e.message };
+  throw e;
+};
+
+function travel(a: AxisValues, b: AxisValues): [number, number] {
+  let max = 0;
+  let sum = 0;
+  for (const k of Object.keys(b)) {
+    const d = Math.abs((a[k] ?? 0) - (b[k] ?? 0));
+    max = Math.max(max, d);
+    sum += d;
+  }
+  return [max, sum];
+}
+
+const rotariesOf = (pm: PreparedMachine, s: AxisValues): AxisValues => Object.fromEntries(pm.rotaries.map((x) => [x.name, s[x.name] ?? 0]));
+
+/** The remaining group nearest in rotary travel (its orientation solved from `current`). */
+function nextGroup(pm: PreparedMachine, groups: Group[], current: AxisValues): { index: number; orientation: Outcome<OrientationResult> } {
+  let best = { index: 0, cost: [Infinity, Infinity] as [number, number], orientation: null as Outcome<OrientationResult> | null };
+  groups.forEach((g, index) => {
+    let orientation: Outcome<OrientationResult>;
+    let cost: [number, number] = [Infinity, Infinity];
+    try {
+      orientation = { ok: true, value: solveOrientation(pm, g.axis, current) };
+      const first = g.items[0]?.starts[0];
+      if (first) {
+        const sol = solutionsFor(pm, first, orientation.value, current);
+        cost = travel(rotariesOf(pm, sol.solutions[sol.chosen]!), current);
+      }
+    } catch (e) {
+      orientation = failure(e);
+    }
+    const better = cost[0] < best.cost[0] - 1e-9 || (Math.abs(cost[0] - best.cost[0]) <= 1e-9 && cost[1] < best.cost[1] - 1e-9);
+    if (best.orientation === null || better) best = { index, cost, orientation };
+  });
+  return { index: best.index, orientation: best.orientation as Outcome<OrientationResult> };
+}
+
+/** Features of a group in a nearest-neighbour chain over their first starts, seen along the tool axis. */
+function orderInGroup(g: Group): Planned[] {
+  const u = perpendicular(g.axis);
+  const v = normalize(cross(g.axis, u));
+  return nearestNeighbourOrder(g.items, (it) => {
+    const p = it.starts[0] ?? [0, 0, 0];
+    return [dot(p, u), dot(p, v)];
+  });
+}
+
+/** One rotary setting for the whole feature: least travel first, every path point inside travel. */
+function pickRotaries(pm: PreparedMachine, it: Planned, orientation: OrientationResult, current: AxisValues, path: ReturnType<typeof featurePath>): Outcome<AxisValues> {
+  const first = it.starts[0];
+  if (!first) return { ok: false, code: 'NO_POINTS', message: 'no touch points' };
+  let sols: AxisValues[];
+  try {
+    const res = solutionsFor(pm, first, orientation, current);
+    sols = [res.solutions[res.chosen]!, ...res.solutions.filter((_, i) => i !== res.chosen)];
+  } catch (e) {
+    return failure(e);
+  }
+  const pts = [...it.starts, ...it.contacts.map((c, i) => addScaled(it.starts[i]!, c.normal, -1)), ...pathPoints(path)];
+  let firstProblem: { code: string; message: string } | null = null;
+  for (const s of sols) {
+    const rot = rotariesOf(pm, s);
+    const problem = outsideTravel(pm, pts, rot);
+    if (!problem) return { ok: true, value: rot };
+    firstProblem ??= problem;
+  }
+  return { ok: false, ...(firstProblem ?? { code: 'OUT_OF_LIMITS', message: 'out of travel' }) };
+}
+
+function outsideTravel(pm: PreparedMachine, pts: Vec3[], rot: AxisValues): { code: string; message: string } | null {
+  for (const p of pts) {
+    const lin = linearAxesFor(pm, p, rot);
+    for (const w of ['X', 'Y', 'Z'] as const) {
+      const [lo, hi] = pm.machine.linear[w];
+      if (lin[w] < lo - 1e-9 || lin[w] > hi + 1e-9) {
+        return { code: 'OUT_OF_LIMITS', message: `${w} would be ${lin[w].toFixed(3)} mm, outside its travel ${lo} to ${hi} mm` };
+      }
+    }
+  }
+  return null;
+}
+
+function emitPoints(it: Planned, r: number, overtravel: number, pm: PreparedMachine, rot: AxisValues, out: TouchPoint[]): void {
+  const key = geometryKey(it.f);
+  it.contacts.forEach((c, i) => {
+    const target = addScaled(c.surface, c.normal, r);
+    const start = it.starts[i]!;
+    out.push({
+      uuid: touchPointUuid(it.f.uuid, key, i),
+      featureUuid: it.f.uuid,
+      seq: out.length,
+      surface: c.surface,
+      normal: c.normal,
+      direction: [-c.normal[0], -c.normal[1], -c.normal[2]],
+      target,
+      start,
+      end: addScaled(target, c.normal, -overtravel),
+      toolAxis: it.axis,
+      axes: { ...linearAxesFor(pm, start, rot), ...rot },
+    });
+  });
+}

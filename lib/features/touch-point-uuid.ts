@@ -1,0 +1,13 @@
+/**
+ * Deterministic touch-point UUIDs: RFC 9562 version 5 (SHA-1, name-based) of the feature
+ * uuid, the feature's canonical geometry and the point's index in the feature, in a
+ * namespace of Probity's own. The same three always give the same uuid, so revisions of
+ * a program can be compared point by point.
+ */
+import { v5 } from 'uuid';
+
+/** Probity's namespace for touch points (a random version-4 uuid drawn once for this project). */
+export const TOUCH_POINT_NAMESPACE = '45dd1cb9-7083-4dfc-8fd2-54fe6f5fed68';
+
+export const touchPointUuid = (featureUuid: string, geometryKey: string, index: number): string =>
+  v5(`${featureUuid.toLowerCase()}|${geometryKey}|${index}`, TOUCH_POINT_NAMESPACE);
