@@ -1,5 +1,5 @@
 /** Runs on the machine, the measured points they bring back, results and corrections. */
-import { boolean, double, index, mysqlEnum, mysqlTable, text, varchar } from 'drizzle-orm/mysql-core';
+import { boolean, double, index, int, mysqlEnum, mysqlTable, text, varchar } from 'drizzle-orm/mysql-core';
 import { createdAt, id, jsonColumn, ref, timestamp, workspaceRef } from './columns';
 import { users, workspaces } from './identity';
 import { tolerances } from './parts';
@@ -29,6 +29,10 @@ export const measurements = mysqlTable('measurements', {
   xMm: double('x_mm').notNull(),
   yMm: double('y_mm').notNull(),
   zMm: double('z_mm').notNull(),
+  /** Line of the uploaded file the record came from (null for simulated runs). */
+  sourceLine: int('source_line'),
+  /** Axis values as the control recorded them (machine frame, mm and degrees); null for CSV. */
+  axes: jsonColumn<Record<string, number>>('axes'),
 }, (t) => [index('measurements_run_idx').on(t.runId, t.touchPointUuid)]);
 
 export const RESULT_STATUSES = ['conforming', 'marginal', 'nonconforming', 'not-evaluated'] as const;
@@ -68,6 +72,8 @@ export const corrections = mysqlTable('corrections', {
   newValue: double('new_value').notNull(),
   /** The block to enter at the controller. */
   code: text('code').notNull(),
+  /** Plain instructions, dead band, cap, the measurement it came from (from the evaluation engine). */
+  details: jsonColumn<Record<string, unknown>>('details'),
   applied: boolean('applied').notNull().default(false),
   appliedBy: ref('applied_by').references(() => users.id),
   appliedAt: timestamp('applied_at'),

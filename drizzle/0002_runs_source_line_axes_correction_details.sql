@@ -1,0 +1,3 @@
+ALTER TABLE `corrections` ADD `details` json;--> statement-breakpoint
+ALTER TABLE `measurements` ADD `source_line` int;--> statement-breakpoint
+ALTER TABLE `measurements` ADD `axes` json;
