@@ -18,10 +18,16 @@ const ALIASES: Record<string, string> = {
   'stainless steel': 'stainless', inox: 'stainless', 'cast iron': 'cast-iron', ti: 'titanium', 'ti-6al-4v': 'titanium',
 };
 
-/** Finds a material by id, name or a common alias (case-insensitive); null when unknown. */
+/** Words that name a material inside a longer description ("6082-T6 aluminium"), most specific first. */
+const WORDS: ReadonlyArray<[string, string]> = [
+  ['stainless', 'stainless'], ['inox', 'stainless'], ['cast iron', 'cast-iron'], ['titanium', 'titanium'], ['ti-6al-4v', 'titanium'],
+  ['brass', 'brass'], ['copper', 'copper'], ['aluminium', 'aluminium'], ['aluminum', 'aluminium'], ['steel', 'steel'],
+];
+
+/** Finds a material by id, name, a common alias or a word in a longer description (case-insensitive); null when unknown. */
 export function findMaterial(name: string | undefined): Material | null {
   if (!name) return null;
   const key = name.trim().toLowerCase();
-  const id = ALIASES[key] ?? key;
-  return MATERIALS.find((m) => m.id === id || m.name.toLowerCase() === key) ?? MATERIALS.find((m) => key.startsWith(m.id)) ?? null;
+  const id = ALIASES[key] ?? WORDS.find(([w]) => key.includes(w))?.[1] ?? key;
+  return MATERIALS.find((m) => m.id === id || m.name.toLowerCase() === key) ?? null;
 }
