@@ -4,6 +4,7 @@
  *
  * - Feature clearance: the probe's `clearance` above the feature's top along its axis;
  *   for a plane, raised above anything standing on it (a boss or web on the face).
+ * - The safe plane is also at least 1 mm above every feature clearance point (safeHeight).
  * - Safe plane for a tool axis t: `clearance` above the highest point of every
  *   feature's bounding sphere along t. The part model holds only its features, so
  *   this envelope stands in for the part; fixtures and clamps are the setup
@@ -11,17 +12,22 @@
  */
 import { addScaled, dot, type Vec3 } from '../geometry/vec3';
 import type { Feature, Part, Probe } from './schema';
-import { boundingSphere, featureAxis, featureTop } from './feature-geometry';
+import { boundingSphere, featureAxis, featureTop, isInterior } from './feature-geometry';
 import { footprintsOnPlane } from './footprints';
 
 export const probeRadius = (probe: Probe): number => (probe.effectiveDiameter ?? probe.stylusDiameter) / 2;
 
-/** Clearance height of a feature above its top, along its axis (mm). */
+/**
+ * Clearance height of a feature above its top, along its axis (mm). For an exterior
+ * feature also at least 1 mm above the highest start (ball radius + approach above a
+ * plane or a pole), so the moves up from a start are never too short to be probe moves.
+ */
 export function featureClearance(f: Feature, part: Part, probe: Probe): number {
-  if (f.type !== 'plane') return probe.clearance;
+  if (isInterior(f)) return probe.clearance;
+  const aboveStarts = probeRadius(probe) + probe.approach + 1;
   let protrude = 0;
-  for (const fp of footprintsOnPlane(f, part, probeRadius(probe))) protrude = Math.max(protrude, fp.height);
-  return protrude + probe.clearance;
+  if (f.type === 'plane') for (const fp of footprintsOnPlane(f, part, probeRadius(probe))) protrude = Math.max(protrude, fp.height);
+  return Math.max(protrude + probe.clearance, aboveStarts);
 }
 
 /** The point above `p` along the feature's axis at the feature's clearance height. */
@@ -32,14 +38,24 @@ export function liftToClearance(f: Feature, p: Vec3, clearanceMm: number): Vec3 
   return addScaled(p, n, clearanceMm - h);
 }
 
-/** Height along unit `t` of the safe plane above all features (absolute p·t value). */
-export function safeHeight(part: Part, probe: Probe, t: Vec3): number {
+/** Every feature's clearance (featureClearance), by feature uuid: compute once per part. */
+export function partClearances(part: Part, probe: Probe): Map<string, number> {
+  return new Map(part.features.map((f) => [f.uuid, featureClearance(f, part, probe)]));
+}
+
+/**
+ * Height along unit `t` of the safe plane (absolute p·t value): `clearance` above every
+ * feature's bounding sphere, and 1 mm above every feature's clearance point.
+ */
+export function safeHeight(part: Part, probe: Probe, t: Vec3, clearances: Map<string, number>): number {
   let h = -Infinity;
   for (const f of part.features) {
     const s = boundingSphere(f);
-    h = Math.max(h, dot(s.c, t) + s.r);
+    h = Math.max(h, dot(s.c, t) + s.r + probe.clearance);
+    const entry = addScaled(featureTop(f), featureAxis(f), clearances.get(f.uuid) ?? probe.clearance);
+    h = Math.max(h, dot(entry, t) + 1);
   }
-  return (Number.isFinite(h) ? h : 0) + probe.clearance;
+  return Number.isFinite(h) ? h : probe.clearance;
 }
 
 /** `p` moved along unit `t` onto the plane p·t = height. */

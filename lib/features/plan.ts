@@ -18,7 +18,7 @@ import type { PlanInput } from './plan-input';
 import { characteristicsByFeature } from './counts';
 import { planContacts, type Contact } from './contacts';
 import { featureAxis, geometryKey } from './feature-geometry';
-import { featureClearance, probeRadius, safeHeight } from './clearance';
+import { partClearances, probeRadius, safeHeight } from './clearance';
 import { featurePath, pathPoints } from './path';
 import { nearestNeighbourOrder } from './patterns';
 import { touchPointUuid } from './touch-point-uuid';
@@ -47,6 +47,7 @@ export function planProgram(input: PlanInput): Plan {
     g.items.push({ f, axis, contacts: res.contacts, starts });
     groups.set(key, g);
   }
+  const clearances = partClearances(part, probe);
   const touchPoints: TouchPoint[] = [];
   let current: AxisValues = Object.fromEntries(pm.rotaries.map((x) => [x.name, 0]));
   const left = [...groups.values()];
@@ -57,9 +58,9 @@ export function planProgram(input: PlanInput): Plan {
       for (const it of g.items) warn(it.f, orientation.code, `${it.f.label}: ${orientation.message}; feature not planned`);
       continue;
     }
-    const safeH = safeHeight(part, probe, g.axis);
+    const safeH = safeHeight(part, probe, g.axis, clearances);
     for (const it of orderInGroup(g)) {
-      const clearance = featureClearance(it.f, part, probe);
+      const clearance = clearances.get(it.f.uuid) ?? probe.clearance;
       const picked = pickRotaries(pm, it, orientation.value, current, featurePath(it.f, it.starts, clearance, g.axis, safeH));
       if (!picked.ok) { warn(it.f, picked.code, `${it.f.label}: ${picked.message}; feature not planned`); continue; }
       current = picked.value;
