@@ -6,13 +6,13 @@
  *   for a plane, raised above anything standing on it (a boss or web on the face).
  * - The safe plane is also at least 1 mm above every feature clearance point (safeHeight).
  * - Safe plane for a tool axis t: `clearance` above the highest point of every
- *   feature's bounding sphere along t. The part model holds only its features, so
+ *   feature along t (heightAlong). The part model holds only its features, so
  *   this envelope stands in for the part; fixtures and clamps are the setup
  *   technician's to clear (the program's caution says so).
  */
 import { addScaled, dot, type Vec3 } from '../geometry/vec3';
 import type { Feature, Part, Probe } from './schema';
-import { boundingSphere, featureAxis, featureTop, isInterior } from './feature-geometry';
+import { featureAxis, featureTop, heightAlong, isInterior } from './feature-geometry';
 import { footprintsOnPlane } from './footprints';
 
 export const probeRadius = (probe: Probe): number => (probe.effectiveDiameter ?? probe.stylusDiameter) / 2;
@@ -45,13 +45,12 @@ export function partClearances(part: Part, probe: Probe): Map<string, number> {
 
 /**
  * Height along unit `t` of the safe plane (absolute p·t value): `clearance` above every
- * feature's bounding sphere, and 1 mm above every feature's clearance point.
+ * feature's highest point, and 1 mm above every feature's clearance point.
  */
 export function safeHeight(part: Part, probe: Probe, t: Vec3, clearances: Map<string, number>): number {
   let h = -Infinity;
   for (const f of part.features) {
-    const s = boundingSphere(f);
-    h = Math.max(h, dot(s.c, t) + s.r + probe.clearance);
+    h = Math.max(h, heightAlong(f, t) + probe.clearance);
     const entry = addScaled(featureTop(f), featureAxis(f), clearances.get(f.uuid) ?? probe.clearance);
     h = Math.max(h, dot(entry, t) + 1);
   }

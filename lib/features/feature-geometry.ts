@@ -39,7 +39,26 @@ export function featureTop(f: Feature): Vec3 {
 /** Interior features (bore, slot): the probe works inside them, where straight moves between starts stay clear. */
 export const isInterior = (f: Feature): boolean => f.type === 'bore' || f.type === 'slot';
 
-/** A sphere enclosing the nominal feature (centre, radius): the part envelope is built from these. */
+/** The highest nominal point of the feature along unit `t` (max p·t over its solid extent). */
+export function heightAlong(f: Feature, t: Vec3): number {
+  const fr = featureFrame(f);
+  const side = (v: Vec3) => Math.abs(dot(v, t));
+  switch (f.type) {
+    case 'plane': return dot(f.origin, t) + (f.size[0] / 2) * side(fr.e1) + (f.size[1] / 2) * side(fr.e2);
+    case 'sphere': return dot(f.center, t) + f.diameter / 2;
+    case 'bore':
+    case 'boss': {
+      const len = f.type === 'bore' ? f.depth : f.height;
+      const radial = (f.diameter / 2) * Math.sqrt(Math.max(0, 1 - dot(fr.n, t) ** 2));
+      return Math.max(dot(f.center, t), dot(addScaled(f.center, fr.n, -len), t)) + radial;
+    }
+    case 'slot':
+    case 'web':
+      return Math.max(dot(f.center, t), dot(addScaled(f.center, fr.n, -f.depth), t)) + (f.width / 2) * side(fr.e1) + (f.length / 2) * side(fr.e2);
+  }
+}
+
+/** A sphere enclosing the nominal feature (centre, radius). */
 export function boundingSphere(f: Feature): { c: Vec3; r: number } {
   const n = featureAxis(f);
   switch (f.type) {

@@ -1,0 +1,122 @@
+/**
+ * The neutral program: a list of steps built from a plan, controller-free. Axis values
+ * are machine coordinates in the program's work offset, which is the model's machine
+ * frame M (mm, degrees). Posts format these steps; the verifier reads them back.
+ *
+ * Per feature: rotaries change only with Z at the top of its travel; then rapid over
+ * to the safe plane, protected moves down to the feature's clearance and to each start,
+ * per touch point a fast touch, an incremental back-off along the normal, a slow touch
+ * at the measuring feed ending at `end`, the TRIP record, a retract to the start, and
+ * protected moves back up to the safe plane.
+ */
+import { distance, type Vec3 } from '../geometry/vec3';
+import { partToMachine } from '../kinematics/forward';
+import { linearAxesFor } from '../kinematics/inverse';
+import { prepareMachine, type PreparedMachine } from '../kinematics/machine';
+import type { AxisValues, Machine } from '../kinematics/schema';
+import type { Feature, Part, Probe } from '../features/schema';
+import { featureAxis } from '../features/feature-geometry';
+import { partClearances, safeHeight } from '../features/clearance';
+import { featurePath } from '../features/path';
+import type { Plan, TouchPoint } from './plan-schema';
+
+export type Step =
+  | { kind: 'feature'; label: string; type: Feature['type']; points: number }
+  | { kind: 'rapid'; to: AxisValues }
+  | { kind: 'rotary'; to: AxisValues }
+  | { kind: 'protected'; to: AxisValues; feed: number }
+  | { kind: 'touch'; to: AxisValues; feed: number; pass: 'fast' | 'slow' }
+  | { kind: 'backoff'; by: AxisValues; feed: number }
+  | { kind: 'record'; uuid: string }
+  | { kind: 'retract'; to: AxisValues; feed: number };
+
+export interface NeutralProgram {
+  steps: Step[];
+  /** Z at the top of its travel: the only place rotaries move. */
+  zTop: number;
+  rotaryNames: string[];
+  touchPoints: number;
+  features: number;
+}
+
+/** Back-off after the fast touch (mm): 1 mm, or half the approach when that is shorter (common practice). */
+export const backoffDistance = (probe: Probe): number => Math.min(1, probe.approach / 2);
+
+/** Protected moves shorter than this are left out (RS274/NGC refuses probe moves under 0.254 mm; NISTIR 6556 §3.5.9.1). */
+export const MIN_PROBE_MOVE_MM = 0.3;
+
+function runs(points: TouchPoint[]): TouchPoint[][] {
+  const out: TouchPoint[][] = [];
+  for (const tp of points) {
+    const last = out[out.length - 1];
+    if (last && last[0]!.featureUuid === tp.featureUuid) last.push(tp);
+    else out.push([tp]);
+  }
+  return out;
+}
+
+const linear = (pm: PreparedMachine, p: Vec3, rot: AxisValues): AxisValues => linearAxesFor(pm, p, rot);
+const rotariesOf = (pm: PreparedMachine, axes: AxisValues): AxisValues => Object.fromEntries(pm.rotaries.map((r) => [r.name, axes[r.name] ?? 0]));
+const sameRotaries = (a: AxisValues | null, b: AxisValues): boolean => a !== null && Object.keys(b).every((k) => Math.abs((a[k] ?? 0) - (b[k] ?? 0)) < 1e-9);
+const xyz = (a: AxisValues): Vec3 => [a.X ?? 0, a.Y ?? 0, a.Z ?? 0];
+
+export function buildProgram(plan: Plan, part: Part, probe: Probe, machine: Machine | PreparedMachine): NeutralProgram {
+  const pm = prepareMachine(machine);
+  const zTop = pm.machine.linear.Z[1];
+  const features = new Map(part.features.map((f) => [f.uuid, f]));
+  const clearances = partClearances(part, probe);
+  const safeByAxis = new Map<string, number>();
+  const steps: Step[] = [];
+  let at: Vec3 | null = null;
+  let rot: AxisValues | null = null;
+  const protectedTo = (to: AxisValues) => {
+    const p = xyz(to);
+    if (at && distance(at, p) < MIN_PROBE_MOVE_MM) return;
+    steps.push({ kind: 'protected', to, feed: probe.fastFeed });
+    at = p;
+  };
+  for (const run of runs(plan.touchPoints)) {
+    const first = run[0]!;
+    const f = features.get(first.featureUuid);
+    if (!f) throw new Error(`touch point ${first.uuid} names feature ${first.featureUuid}, which the part does not have`);
+    const r = rotariesOf(pm, first.axes);
+    const t = featureAxis(f);
+    const key = t.join();
+    const safeH = safeByAxis.get(key) ?? safeHeight(part, probe, t, clearances);
+    safeByAxis.set(key, safeH);
+    const path = featurePath(f, run.map((tp) => tp.start), clearances.get(f.uuid) ?? probe.clearance, t, safeH);
+    steps.push({ kind: 'feature', label: f.label, type: f.type, points: run.length });
+    const safeIn = linear(pm, path.safeIn, r);
+    if (!sameRotaries(rot, r)) {
+      if (pm.rotaries.length > 0 || at === null) steps.push({ kind: 'rapid', to: { Z: zTop } });
+      if (pm.rotaries.length > 0) steps.push({ kind: 'rotary', to: r });
+      steps.push({ kind: 'rapid', to: { X: safeIn.X!, Y: safeIn.Y!, Z: zTop } });
+      rot = r;
+    }
+    steps.push({ kind: 'rapid', to: safeIn });
+    at = xyz(safeIn);
+    protectedTo(linear(pm, path.entry, r));
+    const back = backoffDistance(probe);
+    run.forEach((tp, i) => {
+      for (const b of path.before[i] ?? []) protectedTo(linear(pm, b, r));
+      const start = linear(pm, tp.start, r);
+      const gap = at ? distance(at, xyz(start)) : Infinity;
+      // starts closer than a probe move allows (e.g. a pair across a narrow slot): go via a point 1 mm up the axis
+      if (gap >= 1e-9 && gap < MIN_PROBE_MOVE_MM) protectedTo(linear(pm, [tp.start[0] + t[0], tp.start[1] + t[1], tp.start[2] + t[2]], r));
+      protectedTo(start);
+      const end = linear(pm, tp.end, r);
+      steps.push({ kind: 'touch', to: end, feed: probe.fastFeed, pass: 'fast' });
+      const n = partToMachine(pm, r, tp.normal, true);
+      steps.push({ kind: 'backoff', by: { X: n[0] * back, Y: n[1] * back, Z: n[2] * back }, feed: probe.fastFeed });
+      steps.push({ kind: 'touch', to: end, feed: probe.measureFeed, pass: 'slow' });
+      steps.push({ kind: 'record', uuid: tp.uuid });
+      steps.push({ kind: 'retract', to: start, feed: probe.fastFeed });
+      at = xyz(start);
+      for (const a of path.after[i] ?? []) protectedTo(linear(pm, a, r));
+    });
+    protectedTo(linear(pm, path.exit, r));
+    protectedTo(linear(pm, path.safeOut, r));
+  }
+  steps.push({ kind: 'rapid', to: { Z: zTop } });
+  return { steps, zTop, rotaryNames: pm.rotaries.map((x) => x.name).sort(), touchPoints: plan.touchPoints.length, features: runs(plan.touchPoints).length };
+}

@@ -1,0 +1,76 @@
+/**
+ * Reads a posted program back line by line with the post's own grammar: blocks of words,
+ * comments, trip records, the checks after probe moves, and the statements the
+ * definition and templates write verbatim. Anything else is an unknown line.
+ */
+import type { PostDefinition } from './postprocessor-schema';
+import type { PostGrammar } from './render';
+
+export type ReadLine =
+  | { t: 'blank' }
+  | { t: 'comment'; text: string }
+  | { t: 'record'; uuid: string }
+  | { t: 'fixed'; text: string }
+  | { t: 'protectedCheck'; xyz: number[] }
+  | { t: 'touchCheck'; xyz: number[] }
+  | { t: 'block'; codes: string[]; words: Record<string, number>; unknown: string[] }
+  | { t: 'unknown'; text: string };
+
+const escapeRe = (s: string) => s.replace(/[.*+?^${}()|[\]\\#]/g, '\\$&');
+const TOKEN = /^([A-Z])([-+]?(?:\d+\.?\d*|\.\d+))$/;
+
+export interface Reader { read: (line: string) => ReadLine }
+
+export function makeReader(def: PostDefinition, grammar: PostGrammar, rotaryNames: string[], program: string): Reader {
+  const words = ['X', 'Y', 'Z', ...rotaryNames];
+  const values = words.map((w) => def.trip.value.replace('{word}', w).replace('{var}', def.trip.variables[w] ?? '#0')).join(def.trip.separator);
+  const [pre, post] = def.trip.record.split('{uuid}') as [string, string];
+  const recordRe = new RegExp(`^${escapeRe(pre)}([0-9A-Fa-f-]{36})${escapeRe(post.replace('{values}', values))}$`);
+  const fill = (l: string) => l.replace('{program}', program);
+  const fixed = new Set([
+    ...grammar.fixedLines, ...def.programStart.map(fill), ...def.programEnd, ...def.probeOn, ...def.probeOff,
+    ...def.trip.open.map(fill), ...def.trip.close, ...def.stops.miss, ...def.stops.hit,
+  ]);
+  const known = new Set(def.knownCodes);
+  const axisWords = new Set(words);
+  const numberRe = def.lineNumbers.enabled ? new RegExp(`^${def.lineNumbers.letter}\\d+ `) : null;
+  const { open, close } = def.comments;
+  return {
+    read(raw: string): ReadLine {
+      let line = raw.trim();
+      if (line === '') return { t: 'blank' };
+      if (grammar.labelPrefixes.some((p) => line.startsWith(p))) return { t: 'fixed', text: line };
+      if (numberRe) line = line.replace(numberRe, '');
+      if (fixed.has(line)) return { t: 'fixed', text: line };
+      const rec = recordRe.exec(line);
+      if (rec) return { t: 'record', uuid: (rec[1] as string).toLowerCase() };
+      if (grammar.protectedCheck.test(line)) return { t: 'protectedCheck', xyz: (grammar.protectedCheck.exec(line) ?? []).slice(1).map(Number) };
+      if (grammar.touchCheck?.test(line)) return { t: 'touchCheck', xyz: (grammar.touchCheck.exec(line) ?? []).slice(1).map(Number) };
+      if (line.startsWith(open) && line.endsWith(close)) {
+        const inner = line.slice(open.length, line.length - close.length);
+        if (!inner.includes(open) && !inner.includes(close)) return { t: 'comment', text: inner };
+      }
+      const codes: string[] = [];
+      const w: Record<string, number> = {};
+      const unknown: string[] = [];
+      for (const tok of line.split(/\s+/)) {
+        const m = TOKEN.exec(tok);
+        if (!m) { unknown.push(tok); continue; }
+        const letter = m[1] as string;
+        if (letter === 'G' || letter === 'M') {
+          const code = `${letter}${Number(m[2])}`;
+          if (known.has(code) || known.has(tok)) codes.push(known.has(tok) ? tok : code);
+          else unknown.push(tok);
+        } else if (axisWords.has(letter) || letter === 'F') {
+          w[letter] = Number(m[2]);
+        } else if (known.has(tok)) {
+          codes.push(tok);
+        } else {
+          unknown.push(tok);
+        }
+      }
+      if (codes.length === 0 && Object.keys(w).length === 0) return { t: 'unknown', text: line };
+      return { t: 'block', codes, words: w, unknown };
+    },
+  };
+}
