@@ -6,6 +6,9 @@
  * simulate) are added here by their own module, one line each.
  */
 import { fkCommand, ikCommand, planCommand, postCommand, verifyCommand } from './engine-commands';
+import { evaluateCommand } from './evaluate';
+import { fitCommand } from './fit';
+import { simulateCommand } from './simulate';
 
 export type CommandHandler = (input: unknown) => unknown;
 
@@ -15,4 +18,7 @@ export const commands: Record<string, CommandHandler> = {
   plan: planCommand,
   post: postCommand,
   verify: verifyCommand,
+  fit: fitCommand,
+  evaluate: evaluateCommand,
+  simulate: simulateCommand,
 };
