@@ -1,9 +1,8 @@
 /** Workspaces, people, memberships (roles per workspace), invitations, API tokens. */
 import { boolean, double, index, int, mysqlTable, uniqueIndex, varchar } from 'drizzle-orm/mysql-core';
+import type { Role } from '@/lib/auth/roles';
 import { createdAt, id, jsonColumn, ref, timestamp, workspaceRef } from './columns';
 
-export const ROLES = ['admin', 'programmer', 'engineer', 'reviewer', 'setup'] as const;
-export type Role = (typeof ROLES)[number];
 
 export const workspaces = mysqlTable('workspaces', {
   id: id(),

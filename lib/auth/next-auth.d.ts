@@ -1,0 +1,17 @@
+import 'next-auth';
+import 'next-auth/jwt';
+
+declare module 'next-auth' {
+  interface Session {
+    user: { id: string; name: string; email: string; workspaceId: string };
+  }
+  interface User {
+    workspaceId: string;
+  }
+}
+
+declare module 'next-auth/jwt' {
+  interface JWT {
+    workspaceId?: string;
+  }
+}

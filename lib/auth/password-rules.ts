@@ -1,0 +1,2 @@
+/** Password rules, shared by the browser form and the server (no hashing here). */
+export const PASSWORD_MIN_LENGTH = 10;
