@@ -6,6 +6,7 @@ import 'server-only';
  */
 import { z } from 'zod';
 import { getDb } from '@/db/client';
+import { kickOutbox } from '@/lib/mail/worker';
 import { recordAudit } from '@/db/queries/audit';
 import { getRevisionRowOrThrow, insertDecision, transitionRevision } from '@/db/queries/reviews';
 import { assertNotAuthor } from '@/lib/auth/permissions';
@@ -20,7 +21,7 @@ export const decisionSchema = z.discriminatedUnion('decision', [
 export type DecisionInput = z.infer<typeof decisionSchema>;
 
 export async function decideRevision(ctx: Ctx, revisionId: string, input: DecisionInput): Promise<{ status: 'approved' | 'sent-back' }> {
-  return getDb().transaction(async (tx) => {
+  const out = await getDb().transaction(async (tx) => {
     const rev = await getRevisionRowOrThrow(tx, ctx, revisionId);
     if (rev.status !== 'in-review') {
       throw new AppError('conflict', `This revision is ${rev.status.replace('-', ' ')}, not waiting for review.`);
@@ -52,4 +53,6 @@ export async function decideRevision(ctx: Ctx, revisionId: string, input: Decisi
     });
     return { status };
   });
+  kickOutbox();
+  return out;
 }

@@ -1,15 +1,15 @@
 import 'server-only';
 /**
- * Review and run notifications, written to the persisted mail outbox inside the caller's
- * transaction (delivered and retried by the outbox worker). Recipients are looked up by
+ * Review and run notifications, written to the persisted mail outbox (lib/mail) inside the
+ * caller's transaction; the caller kicks the outbox after the commit. Recipients are looked up by
  * role in the workspace, active members only.
  */
 import { and, eq, inArray } from 'drizzle-orm';
-import { v4 as uuidv4 } from 'uuid';
 import type { DbOrTx } from '@/db/client';
-import { mailOutbox, memberships, users } from '@/db/schema';
+import { memberships, users } from '@/db/schema';
 import type { Role } from '@/lib/auth/roles';
 import { getEnv } from '@/lib/env';
+import { enqueueMail } from '@/lib/mail/outbox';
 
 export interface Recipient { id: string; email: string; name: string }
 
@@ -32,25 +32,15 @@ export function appLink(path: string): string {
   return new URL(path, getEnv().NEXTAUTH_URL).toString();
 }
 
+/** Queues one message per distinct recipient through the outbox (call kickOutbox after the commit). */
 export async function queueMail(
   db: DbOrTx,
   mail: { workspaceId: string; kind: string; to: Recipient[]; subject: string; text: string },
 ): Promise<number> {
-  const now = new Date();
   const seen = new Set<string>();
-  const rows = mail.to.filter((r) => !seen.has(r.email) && seen.add(r.email)).map((r) => ({
-    id: uuidv4(),
-    workspaceId: mail.workspaceId,
-    kind: mail.kind,
-    toAddress: r.email,
-    subject: mail.subject.slice(0, 200),
-    textBody: `Hello ${r.name},\n\n${mail.text}\n\n— Probity`,
-    htmlBody: null,
-    status: 'pending' as const,
-    attempts: 0,
-    nextAttemptAt: now,
-    createdAt: now,
-  }));
-  if (rows.length > 0) await db.insert(mailOutbox).values(rows);
-  return rows.length;
+  const to = mail.to.filter((r) => !seen.has(r.email) && seen.add(r.email));
+  for (const r of to) {
+    await enqueueMail(db, { workspaceId: mail.workspaceId, kind: mail.kind, to: r.email, subject: mail.subject.slice(0, 200), text: `Hello ${r.name},\n\n${mail.text}\n\n— Probity` });
+  }
+  return to.length;
 }

@@ -1,6 +1,7 @@
 import 'server-only';
 /** A programmer sends a draft (or sent-back) revision for review; reviewers get an e-mail. */
 import { getDb } from '@/db/client';
+import { kickOutbox } from '@/lib/mail/worker';
 import { recordAudit } from '@/db/queries/audit';
 import { getRevisionRowOrThrow, transitionRevision } from '@/db/queries/reviews';
 import { AppError } from '@/lib/server/app-error';
@@ -8,7 +9,7 @@ import type { Ctx } from '@/lib/server/context';
 import { appLink, membersWithRoles, queueMail } from './mail';
 
 export async function submitRevision(ctx: Ctx, revisionId: string): Promise<{ status: 'in-review'; notified: number }> {
-  return getDb().transaction(async (tx) => {
+  const out = await getDb().transaction(async (tx) => {
     const rev = await getRevisionRowOrThrow(tx, ctx, revisionId);
     if (rev.status === 'in-review') throw new AppError('conflict', 'This revision is already waiting for review.');
     if (rev.status === 'approved') throw new AppError('conflict', 'This revision is approved and locked; edit it to make a new revision.');
@@ -29,4 +30,6 @@ export async function submitRevision(ctx: Ctx, revisionId: string): Promise<{ st
     });
     return { status: 'in-review' as const, notified };
   });
+  kickOutbox();
+  return out;
 }
