@@ -13,7 +13,7 @@
 import { addScaled, dot, type Vec3 } from '../geometry/vec3';
 import type { Feature, Part, Probe } from './schema';
 import { featureAxis, featureTop, heightAlong, isInterior } from './feature-geometry';
-import { footprintsOnPlane } from './footprints';
+import { footprintSources, footprintsOnPlane, type FootprintSources } from './footprints';
 
 export const probeRadius = (probe: Probe): number => (probe.effectiveDiameter ?? probe.stylusDiameter) / 2;
 
@@ -22,11 +22,11 @@ export const probeRadius = (probe: Probe): number => (probe.effectiveDiameter ??
  * feature also at least 1 mm above the highest start (ball radius + approach above a
  * plane or a pole), so the moves up from a start are never too short to be probe moves.
  */
-export function featureClearance(f: Feature, part: Part, probe: Probe): number {
+export function featureClearance(f: Feature, sources: FootprintSources, probe: Probe): number {
   if (isInterior(f)) return probe.clearance;
   const aboveStarts = probeRadius(probe) + probe.approach + 1;
   let protrude = 0;
-  if (f.type === 'plane') for (const fp of footprintsOnPlane(f, part, probeRadius(probe))) protrude = Math.max(protrude, fp.height);
+  if (f.type === 'plane') for (const fp of footprintsOnPlane(f, sources, probeRadius(probe))) protrude = Math.max(protrude, fp.height);
   return Math.max(protrude + probe.clearance, aboveStarts);
 }
 
@@ -40,7 +40,8 @@ export function liftToClearance(f: Feature, p: Vec3, clearanceMm: number): Vec3 
 
 /** Every feature's clearance (featureClearance), by feature uuid: compute once per part. */
 export function partClearances(part: Part, probe: Probe): Map<string, number> {
-  return new Map(part.features.map((f) => [f.uuid, featureClearance(f, part, probe)]));
+  const sources = footprintSources(part);
+  return new Map(part.features.map((f) => [f.uuid, featureClearance(f, sources, probe)]));
 }
 
 /**

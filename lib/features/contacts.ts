@@ -11,9 +11,9 @@
  */
 import { addScaled, type Vec3 } from '../geometry/vec3';
 import { toRad } from '../geometry/rotation';
-import type { Feature, Part } from './schema';
+import type { Feature } from './schema';
 import { featureFrame, type FeatureFrame } from './feature-geometry';
-import { footprintsOnPlane } from './footprints';
+import { footprintsOnPlane, type FootprintSources } from './footprints';
 import { capPoints, circleAngles, levelDepths, nearestNeighbourOrder, pairPositions, spreadOverRectangle } from './patterns';
 import { decideCount, defaultLevelCount } from './counts';
 import type { Characteristic } from './schema';
@@ -32,7 +32,7 @@ export const PLANE_MARGIN_MM = 2;
 export const LEVEL_MARGIN_MM = 1;
 export const CAP_POLAR_DEG = 60;
 
-interface Ctx { part: Part; r: number; approach: number; characteristics: Set<Characteristic> }
+interface Ctx { sources: FootprintSources; r: number; approach: number; characteristics: Set<Characteristic> }
 
 const fault = (code: string, message: string): ContactResult => ({ contacts: [], fault: { code, message }, notes: [] });
 
@@ -58,7 +58,7 @@ function planeContacts(f: Extract<Feature, { type: 'plane' }>, fr: FeatureFrame,
   const hv = f.size[1] / 2 - margin;
   if (hu < 0 || hv < 0) return fault('PLANE_TOO_SMALL', `${f.label}: the face is smaller than twice its margin of ${margin} mm`);
   const { count, raisedFrom } = decideCount(f, 1);
-  const prints = footprintsOnPlane(f, ctx.part, ctx.r);
+  const prints = footprintsOnPlane(f, ctx.sources, ctx.r);
   const pts = spreadOverRectangle(count, hu, hv, (p) => prints.some((fp) => fp.contains(p)));
   if (pts.length < 3) return fault('PLANE_NO_ROOM', `${f.label}: only ${pts.length} free place(s) for touch points inside the margin, away from the features on the face`);
   const ordered = nearestNeighbourOrder(pts, (p) => p);

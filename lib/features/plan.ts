@@ -21,6 +21,7 @@ import { featureAxis, geometryKey } from './feature-geometry';
 import { partClearances, probeRadius, safeHeight } from './clearance';
 import { featurePath, pathPoints } from './path';
 import { nearestNeighbourOrder } from './patterns';
+import { footprintSources } from './footprints';
 import { touchPointUuid } from './touch-point-uuid';
 
 interface Planned { f: Feature; axis: Vec3; contacts: Contact[]; starts: Vec3[] }
@@ -36,8 +37,9 @@ export function planProgram(input: PlanInput): Plan {
   const warnings: PlanWarning[] = [];
   const warn = (f: Feature, code: string, message: string) => warnings.push({ featureUuid: f.uuid, label: f.label, code, message });
   const groups = new Map<string, Group>();
+  const sources = footprintSources(part);
   for (const f of part.features) {
-    const res = planContacts(f, { part, r, approach: probe.approach, characteristics: chars.get(f.uuid) ?? new Set() });
+    const res = planContacts(f, { sources, r, approach: probe.approach, characteristics: chars.get(f.uuid) ?? new Set() });
     for (const n of res.notes) warn(f, n.code, n.message);
     if (res.fault) { warn(f, res.fault.code, `${res.fault.message}; feature not planned`); continue; }
     const axis = featureAxis(f);

@@ -37,11 +37,13 @@ export function makeReader(def: PostDefinition, grammar: PostGrammar, rotaryName
   const { open, close } = def.comments;
   return {
     read(raw: string): ReadLine {
-      let line = raw.trim();
+      let line = raw.includes('\t') ? raw.replace(/\t/g, ' ').trim() : raw.trim();
       if (line === '') return { t: 'blank' };
       if (grammar.labelPrefixes.some((p) => line.startsWith(p))) return { t: 'fixed', text: line };
       if (numberRe) line = line.replace(numberRe, '');
       if (fixed.has(line)) return { t: 'fixed', text: line };
+      const c0 = line.charCodeAt(0);
+      if (c0 === 71 /* G */ || c0 === 77 /* M */) return block(line);
       const rec = recordRe.exec(line);
       if (rec) return { t: 'record', uuid: (rec[1] as string).toLowerCase() };
       if (grammar.protectedCheck.test(line)) return { t: 'protectedCheck', xyz: (grammar.protectedCheck.exec(line) ?? []).slice(1).map(Number) };
@@ -50,10 +52,16 @@ export function makeReader(def: PostDefinition, grammar: PostGrammar, rotaryName
         const inner = line.slice(open.length, line.length - close.length);
         if (!inner.includes(open) && !inner.includes(close)) return { t: 'comment', text: inner };
       }
+      return block(line);
+    },
+  };
+
+  function block(line: string): ReadLine {
       const codes: string[] = [];
       const w: Record<string, number> = {};
       const unknown: string[] = [];
-      for (const tok of line.split(/\s+/)) {
+      for (const tok of line.split(' ')) {
+        if (tok === '') continue;
         const m = TOKEN.exec(tok);
         if (!m) { unknown.push(tok); continue; }
         const letter = m[1] as string;
@@ -71,6 +79,5 @@ export function makeReader(def: PostDefinition, grammar: PostGrammar, rotaryName
       }
       if (codes.length === 0 && Object.keys(w).length === 0) return { t: 'unknown', text: line };
       return { t: 'block', codes, words: w, unknown };
-    },
-  };
+  }
 }

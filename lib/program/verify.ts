@@ -41,6 +41,8 @@ interface Ctx {
   points: Map<string, TouchPoint>;
   safe: Map<string, number>;
   clearances: Map<string, number>;
+  /** Replay frames by rotary setting (see partPose). */
+  frames: Map<string, { o: Vec3; x: Vec3; y: Vec3; z: Vec3; axis: Vec3 }>;
   findings: Finding[];
 }
 
@@ -57,7 +59,7 @@ export function verifyProgram(input: VerifyInput, post: ReadyPost): VerifyResult
     pm, part: input.part, probe: input.probe, r: probeRadius(input.probe), zTop: pm.machine.linear.Z[1],
     features: new Map(input.part.features.map((f) => [f.uuid, { f, frame: featureFrame(f), clearance: clearances.get(f.uuid) ?? input.probe.clearance, top: featureTop(f) }])),
     points: new Map(input.plan.touchPoints.map((tp) => [tp.uuid.toLowerCase(), tp])),
-    safe: new Map(), clearances, findings: [],
+    safe: new Map(), clearances, frames: new Map(), findings: [],
   };
   const add = (line: number, code: string, message: string, severity: Finding['severity'] = 'error') => ctx.findings.push({ line, code, severity, message });
   checkHeader(lines, raw, post, add);
@@ -181,7 +183,28 @@ function checkLimits(ctx: Ctx, pos: AxisValues, ln: number, add: (l: number, c: 
   }
 }
 
-const partPose = (ctx: Ctx, axes: AxisValues): Pose => forwardKinematics(ctx.pm, axes);
+/**
+ * Forward kinematics for replay: at fixed rotary angles fk is affine in X, Y, Z, so the
+ * map is built once per rotary setting (from fk itself) and applied per line.
+ */
+function partPose(ctx: Ctx, axes: AxisValues): Pose {
+  let key = '';
+  for (const r of ctx.pm.rotaries) key += `${axes[r.name] ?? 0},`;
+  let m = ctx.frames.get(key);
+  if (!m) {
+    const base = forwardKinematics(ctx.pm, { ...axes, X: 0, Y: 0, Z: 0 });
+    const col = (k: 'X' | 'Y' | 'Z') => sub(forwardKinematics(ctx.pm, { ...axes, X: 0, Y: 0, Z: 0, [k]: 1 }).tip, base.tip);
+    m = { o: base.tip, x: col('X'), y: col('Y'), z: col('Z'), axis: base.axis };
+    ctx.frames.set(key, m);
+  }
+  const X = axes.X ?? 0;
+  const Y = axes.Y ?? 0;
+  const Z = axes.Z ?? 0;
+  return {
+    tip: [m.o[0] + m.x[0] * X + m.y[0] * Y + m.z[0] * Z, m.o[1] + m.x[1] * X + m.y[1] * Y + m.z[1] * Z, m.o[2] + m.x[2] * X + m.y[2] * Y + m.z[2] * Z],
+    axis: m.axis,
+  };
+}
 
 function safeAt(ctx: Ctx, t: Vec3): number {
   const key = t.map((v) => v.toFixed(6)).join();

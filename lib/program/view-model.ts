@@ -92,10 +92,12 @@ export function buildView(def: PostDefinition, prog: NeutralProgram, part: Part,
         const uuid = def.trip.uuidCase === 'upper' ? s.uuid.toUpperCase() : s.uuid;
         return { kind: s.kind, record: fill(def.trip.record, { uuid, values }) };
       }
-      default: return {
-        kind: s.kind, words: lin(s.to), feed: feed(s.feed),
-        x: fixed(s.to.X ?? 0, dl), y: fixed(s.to.Y ?? 0, dl), z: fixed(s.to.Z ?? 0, dl),
-      };
+      default: {
+        const x = fixed(s.to.X ?? 0, dl);
+        const y = fixed(s.to.Y ?? 0, dl);
+        const z = fixed(s.to.Z ?? 0, dl);
+        return { kind: s.kind, words: `X${x} Y${y} Z${z}`, feed: feed(s.feed), x, y, z };
+      }
     }
   });
   return {
