@@ -4,9 +4,10 @@
  * A record is the engine's machine model (lib/kinematics/schema.ts) plus what the
  * shop keeps beside it: the controller dialect (post-processor id) and the head
  * pivot distance. A head rotary's `point` in a record is measured from the head
- * pivot (usually [0, 0, 0]); the engine wants it relative to the probe tip, so
- * `toEngineMachine` adds the pivot distance and the probe length along +Z
- * (tool axis at all rotaries zero). Millimetres and degrees.
+ * pivot (usually [0, 0, 0]); the stored model (machine_versions.model) is the
+ * engine machine for a zero-length tool (pivot distance added along +Z), and the
+ * engine gets the probe length added on top (tool axis +Z at all rotaries zero).
+ * Millimetres and degrees.
  */
 import { z } from 'zod';
 import { machineSchema, vec3Schema, directionSchema, type Machine } from '../kinematics/schema';
@@ -61,17 +62,43 @@ export const ikRequestSchema = z.object({
 });
 export type IkRequest = z.infer<typeof ikRequestSchema>;
 
+type ModelParts = Pick<Machine, 'name' | 'rotaries' | 'linear' | 'setup'>;
+const lifted = (m: ModelParts, lift: number): Machine => ({
+  name: m.name,
+  linear: m.linear,
+  setup: m.setup,
+  rotaries: m.rotaries.map((r) => (r.carrier === 'head' ? { ...r, point: [r.point[0], r.point[1], r.point[2] + lift] } : { ...r })),
+});
+
+/**
+ * The stored model of a record: the engine's machine for a zero-length tool (head
+ * points measured from the tip at the gauge line), so it is a valid engine model.
+ */
+export function recordToModel(record: ModelParts & { headPivotMm: number }): Machine {
+  return lifted(record, record.headPivotMm);
+}
+
+/** Back from a stored model to the pivot-relative points the engineer edits. */
+export function modelToRecordParts(model: Machine, headPivotMm: number): ModelParts {
+  return lifted(model, -headPivotMm);
+}
+
+/** The engine's machine for a stored model and the probe in the spindle. */
+export function engineMachineFor(model: Machine, probeLengthMm: number): Machine {
+  return lifted(model, probeLengthMm);
+}
+
 /** The engine's model for a record and a probe length (see the header comment). */
-export function toEngineMachine(record: Pick<MachineRecord, 'name' | 'rotaries' | 'linear' | 'setup' | 'headPivotMm'>, probeLengthMm: number): Machine {
-  const lift = record.headPivotMm + probeLengthMm;
-  return {
-    name: record.name,
-    linear: record.linear,
-    setup: record.setup,
-    rotaries: record.rotaries.map((r) =>
-      r.carrier === 'head' ? { ...r, point: [r.point[0], r.point[1], r.point[2] + lift] } : { ...r },
-    ),
-  };
+export function toEngineMachine(record: ModelParts & { headPivotMm: number }, probeLengthMm: number): Machine {
+  return engineMachineFor(recordToModel(record), probeLengthMm);
+}
+
+/** The layout name stored with a machine, from its rotaries. */
+export function layoutOf(m: Pick<Machine, 'rotaries'>): 'three-axis' | 'table-table' | 'head-table' | 'head-head' {
+  const heads = m.rotaries.filter((r) => r.carrier === 'head').length;
+  if (m.rotaries.length === 0) return 'three-axis';
+  if (heads === 0) return 'table-table';
+  return heads === m.rotaries.length ? 'head-head' : 'head-table';
 }
 
 /** Words a person reads for a rotary's layout, e.g. "C on the table, about +Z". */

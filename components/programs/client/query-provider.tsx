@@ -1,0 +1,9 @@
+'use client';
+/** TanStack Query for one interactive screen (first paint comes from the server component). */
+import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
+import { useState, type ReactNode } from 'react';
+
+export function QueryProvider({ children }: { children: ReactNode }) {
+  const [client] = useState(() => new QueryClient({ defaultOptions: { queries: { staleTime: 15_000, retry: 1, refetchOnWindowFocus: false } } }));
+  return <QueryClientProvider client={client}>{children}</QueryClientProvider>;
+}
