@@ -22,11 +22,13 @@ export function fitCylinder(points: readonly Vec3[], hint?: Vec3): CylinderFit {
   const sc = scatterFlat(xyz);
   const c = sc.centroid;
   const candidates: Vec3[] = hint ? [normalize(hint)] : principalAxes(sc).vectors;
+  // Choosing among candidate axes needs no more than a few hundred points.
+  const sample = subsample(xyz, 500);
   let best: { state: CylState; score: number } | null = null;
   for (const u of candidates) {
     try {
-      const state = startFor(xyz, c, u);
-      const score = costOf(xyz, state) / (state.r * state.r);
+      const state = startFor(sample, c, u);
+      const score = costOf(sample, state) / (state.r * state.r);
       if (!best || score < best.score) best = { state, score };
     } catch {
       // a candidate axis along which the points project onto a line: try the next one
@@ -101,6 +103,17 @@ function costOf(xyz: Float64Array, s: CylState): number {
     cost += d * d;
   }
   return cost;
+}
+
+function subsample(xyz: Float64Array, max: number): Float64Array {
+  const m = xyz.length / 3;
+  if (m <= max) return xyz;
+  const stride = Math.ceil(m / max);
+  const out = new Float64Array(3 * Math.ceil(m / stride));
+  for (let i = 0, k = 0; i < m; i += stride, k++) {
+    out[3 * k] = xyz[3 * i] as number; out[3 * k + 1] = xyz[3 * i + 1] as number; out[3 * k + 2] = xyz[3 * i + 2] as number;
+  }
+  return out;
 }
 
 /** Axis through the Kåsa centre of the points projected along `u`. */

@@ -3,7 +3,7 @@
  * smallest (plane) eigenvector of the scatter matrix — closed form, no iteration
  * (Shakarji, J. Res. NIST 103 (1998) §3.1–3.2).
  */
-import { principalAxes, scatterFlat, toFlat, type Scatter } from './scatter';
+import { principalAxes, scatterFlat, toFlat } from './scatter';
 import { FitError, assertFinitePoints, summarise, type LineFit, type PlaneFit } from './types';
 import { cross, dot, norm, sub, type Vec3 } from '../geometry/vec3';
 
@@ -16,41 +16,71 @@ function orient(v: Vec3, hint?: Vec3): Vec3 {
   return v;
 }
 
-export function fitPlaneFlat(xyz: Float64Array, hint?: Vec3): PlaneFit {
+export interface PlaneParameters {
+  origin: Vec3;
+  normal: Vec3;
+  /** Residual RMS from the smallest eigenvalue of the scatter (no second pass). */
+  rms: number;
+  solver: PlaneFit['solver'];
+  pointCount: number;
+}
+
+/**
+ * The plane's parameters from ONE pass over flat x y z data (the path for
+ * million-point clouds): centroid, normal, residual RMS and the solver report.
+ */
+export function planeParametersFlat(xyz: Float64Array, hint?: Vec3): PlaneParameters {
   const n = Math.floor(xyz.length / 3);
   if (n < 3) throw new FitError('TOO_FEW_POINTS', `a plane needs at least 3 points; got ${n}`);
   const s = scatterFlat(xyz);
-  return planeFromScatter(s, xyz, hint);
-}
-
-export function fitPlane(points: readonly Vec3[], hint?: Vec3): PlaneFit {
-  assertFinitePoints(points, 3, 'plane');
-  return fitPlaneFlat(toFlat(points), hint);
-}
-
-function planeFromScatter(s: Scatter, xyz: Float64Array, hint?: Vec3): PlaneFit {
   const ax = principalAxes(s);
   const [l0, l1, l2] = ax.values;
   if (l2 <= 0) throw new FitError('COINCIDENT_POINTS', 'all points coincide: no plane is defined');
   if (l1 <= DEGENERATE_RATIO * l2 + Number.MIN_VALUE) {
     throw new FitError('COLLINEAR_POINTS', 'the points lie on one line: no plane is defined');
   }
-  const normal = orient(ax.vectors[0], hint ?? [0, 0, 1]);
-  const c = s.centroid;
-  const values = new Array<number>(s.count);
-  for (let i = 0, k = 0; k < s.count; i += 3, k++) {
-    values[k] = ((xyz[i] as number) - c[0]) * normal[0] + ((xyz[i + 1] as number) - c[1]) * normal[1] + ((xyz[i + 2] as number) - c[2]) * normal[2];
-  }
-  const residuals = summarise(values);
   return {
-    shape: 'plane', method: 'least-squares', origin: c, normal, residuals,
-    form: residuals.max - residuals.min,
+    origin: s.centroid, normal: orient(ax.vectors[0], hint ?? [0, 0, 1]), rms: Math.sqrt(Math.max(l0, 0) / n), pointCount: n,
     solver: {
       iterations: ax.sweeps, converged: true, stopReason: 'closed-form',
       condition: l0 > 0 ? Math.sqrt(l2 / l0) : Number.MAX_VALUE, rank: l0 > DEGENERATE_RATIO * l2 ? 3 : 2,
     },
-    pointCount: s.count,
   };
+}
+
+/**
+ * Full plane fit of flat data: parameters, then a second pass for the signed residuals
+ * (kept per point unless `keepValues` is false, when only RMS, max and min are returned).
+ */
+export function fitPlaneFlat(xyz: Float64Array, hint?: Vec3, keepValues = true): PlaneFit {
+  const p = planeParametersFlat(xyz, hint);
+  const [nx, ny, nz] = p.normal;
+  const off = p.origin[0] * nx + p.origin[1] * ny + p.origin[2] * nz;
+  let lo = Infinity, hi = -Infinity, sq = 0;
+  const values = keepValues ? new Array<number>(p.pointCount) : undefined;
+  if (values) {
+    for (let i = 0, k = 0; k < p.pointCount; i += 3, k++) {
+      const d = (xyz[i] as number) * nx + (xyz[i + 1] as number) * ny + (xyz[i + 2] as number) * nz - off;
+      values[k] = d;
+      sq += d * d;
+      lo = lo < d ? lo : d;
+      hi = hi > d ? hi : d;
+    }
+  } else {
+    for (let i = 0; i < 3 * p.pointCount; i += 3) {
+      const d = (xyz[i] as number) * nx + (xyz[i + 1] as number) * ny + (xyz[i + 2] as number) * nz - off;
+      sq += d * d;
+      lo = lo < d ? lo : d;
+      hi = hi > d ? hi : d;
+    }
+  }
+  const residuals = { rms: Math.sqrt(sq / p.pointCount), max: hi, min: lo, ...(values ? { values } : {}) };
+  return { shape: 'plane', method: 'least-squares', origin: p.origin, normal: p.normal, residuals, form: hi - lo, solver: p.solver, pointCount: p.pointCount };
+}
+
+export function fitPlane(points: readonly Vec3[], hint?: Vec3): PlaneFit {
+  assertFinitePoints(points, 3, 'plane');
+  return fitPlaneFlat(toFlat(points), hint);
 }
 
 /**

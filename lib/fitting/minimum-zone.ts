@@ -63,7 +63,7 @@ export function minimumZonePlane(points: readonly Vec3[], ls: PlaneFit): Minimum
     return { method: 'minimum-zone', form: ls.form, normal: ls.normal, origin: ls.origin, supports: points.map((_, i) => i), rounds: 0, candidates: 1 };
   }
   const all = points.map((_, i) => i);
-  let work = initialSet(ls.residuals.values);
+  let work = initialSet(ls.residuals.values ?? points.map((p) => dot(sub(p, ls.origin), ls.normal)));
   let candidates = 0;
   for (let round = 1; round <= MAX_ROUNDS; round++) {
     let best = { width: widthAlong(points, work, ls.normal), normal: ls.normal };

@@ -28,8 +28,8 @@ export interface Residuals {
   rms: number;
   max: number;
   min: number;
-  /** Signed orthogonal distance of every point, in input order. */
-  values: number[];
+  /** Signed orthogonal distance of every point, in input order (left out only by `fitPlaneFlat(…, false)`). */
+  values?: number[];
 }
 
 export type StopReason =
