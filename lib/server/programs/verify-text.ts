@@ -1,13 +1,16 @@
 import 'server-only';
 /**
  * The one place the app calls the engine's verifier, so generated and edited
- * texts are checked the same way.
+ * texts are checked the same way: the text is read back with the post's own
+ * grammar and replayed against the plan.
  */
+import { verifyProgram } from '@/lib/program/verify';
+import { requirePost } from '@/lib/program/post';
 import type { Plan } from '@/lib/program/plan-schema';
 import type { Finding } from '@/lib/validation/programs';
 import type { EngineInputs } from './build-revision';
 
-export function verifyText(_text: string, _inputs: EngineInputs, _plan: Plan): Finding[] {
-  // The engine's verifier (lib/program, issue 3) has not landed yet; say so rather than pass silently.
-  return [{ line: 0, code: 'VERIFIER_NOT_AVAILABLE', severity: 'warning', message: 'This text has not been verified: the verifier is not in this build yet' }];
+export function verifyText(text: string, inputs: EngineInputs, plan: Plan): Finding[] {
+  const result = verifyProgram({ program: text, part: inputs.part, probe: inputs.probe, machine: inputs.machine, plan }, requirePost(inputs.post));
+  return result.findings;
 }
