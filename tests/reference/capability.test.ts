@@ -6,6 +6,11 @@ import { decide } from '@/lib/capability/decision';
 import { findMaterial } from '@/lib/capability/materials';
 import { capability, falseAcceptRisk } from '@/lib/capability/risk';
 import { correctLength } from '@/lib/capability/temperature';
+import { adviseCapability } from '@/lib/evaluation/capability-advice';
+import { planProgram } from '@/lib/features/plan';
+import { planInputSchema } from '@/lib/features/plan-input';
+import { demoBracket, demoProbe } from '@/lib/examples/demo-parts';
+import { machinePreset } from '@/lib/kinematics/presets';
 
 describe('TUR and the ISO 14253-1 default rule', () => {
   // Source: TUR = span/(2·U95) [published] ANSI/NCSL Z540.3 handbook via Morehouse; check values independently computed (REFERENCES.md §7).
@@ -81,5 +86,24 @@ describe('temperature correction to 20 °C', () => {
     expect(r.value).toBe(10);
     expect(r.correction.applied).toBe(false);
     expect(r.correction.note).toMatch(/no part temperature/);
+  });
+});
+
+describe('capability advice per tolerance before machining', () => {
+  // Source: TUR = span/(2U) and the 4:1 threshold [published] ANSI/NCSL Z540.3 via Morehouse (REFERENCES.md §7).
+  it('the demo bracket on a 3-axis machine: TUR per tolerance from the planned points', async () => {
+    const plan = planProgram(planInputSchema.parse({ part: demoBracket, probe: demoProbe, machine: machinePreset('3-axis') }));
+    const conditions = { probeRepeatability2Sigma: 0.001, effectiveDiameterU: 0.001, machine: { aUm: 1.5, bMm: 500 }, partTemperatureC: 20 };
+    const advice = adviseCapability(demoBracket, plan, conditions);
+    expect(advice).toHaveLength(demoBracket.tolerances.length);
+    for (const a of advice) {
+      if (!a.capability || !a.budget || a.span === null) continue;
+      expect(a.capability.tur).toBeCloseTo(a.span / (2 * a.budget.U), 12);
+      expect(a.capability.advice).toBe(a.capability.tur >= 4 ? 'on-machine' : 'cmm');
+    }
+    const h7 = advice.find((a) => a.characteristic === 'diameter' && a.span !== null && Math.abs(a.span - 0.018) < 1e-12);
+    expect(h7?.capability?.advice).toBeDefined();
+    const unplanned = advice.find((a) => a.points === 0);
+    expect(unplanned?.message).toMatch(/no planned touch points/);
   });
 });
