@@ -10,7 +10,8 @@ async function main(): Promise<void> {
 
 main()
   .catch((error: unknown) => {
-    console.error('[migrate] failed:', error instanceof Error ? error.message : error);
+    const cause = error instanceof Error && error.cause instanceof Error ? ` (${error.cause.message})` : '';
+    console.error('[migrate] failed:', error instanceof Error ? error.message + cause : error);
     process.exitCode = 1;
   })
   .finally(() => closeDb());

@@ -10,12 +10,16 @@ MAILBOX="${TEST_MAILBOX_PORT:-2680}"
 REPORTS=test-results/reports
 STARTED_AT=$(date +%s)
 declare -a FAILED_STEPS=()
+# Developers may skip steps while iterating: npm test -- --skip=lint,typecheck,vitest
+SKIP=","
+for a in "$@"; do case "$a" in --skip=*) SKIP=",${a#--skip=},";; *) fail "unknown option $a (known: --skip=lint,typecheck,vitest,build,playwright)";; esac; done
 
 trap 'cleanup; exit 130' INT TERM
 trap cleanup EXIT
 
 step() {
   local name="$1"; shift
+  if [[ "$SKIP" == *",$name,"* ]]; then log "── $name: skipped (--skip)"; return; fi
   local t0; t0=$(date +%s)
   log "── $name"
   if "$@"; then log "   $name: ok ($(( $(date +%s) - t0 )) s)"; else log "   $name: FAILED ($(( $(date +%s) - t0 )) s)"; FAILED_STEPS+=("$name"); fi

@@ -13,7 +13,7 @@ test('engineer creates an AC trunnion from a preset, reverses C, tries a pose', 
   await page.getByLabel('Name', { exact: true }).fill(name);
   await page.getByRole('button', { name: 'Create machine' }).click();
   await expect(page.getByRole('heading', { name })).toBeVisible({ timeout: 60_000 });
-  await expect(page.getByText('Version 1')).toBeVisible();
+  await expect(page.getByTestId('machine-version')).toContainText('Version 1');
   await expect(page.getByTestId('machine-view').locator('canvas')).toBeVisible({ timeout: 30_000 });
   await page.screenshot({ path: 'test-results/screens/plan-machine-created.png', fullPage: true });
 
@@ -26,7 +26,7 @@ test('engineer creates an AC trunnion from a preset, reverses C, tries a pose', 
   await expect(z).toHaveValue(String(-before));
   await page.getByLabel('What changed').fill('C sense reversed after the table test');
   await page.getByRole('button', { name: 'Save as a new version' }).click();
-  await expect(page.getByText('Version 2')).toBeVisible({ timeout: 30_000 });
+  await expect(page.getByTestId('machine-version')).toContainText('Version 2', { timeout: 30_000 });
   await expect(page.getByRole('cell', { name: 'C sense reversed after the table test' })).toBeVisible();
 
   // Forward: A = 30° tilts the tool axis in the part frame away from +Z.

@@ -1,7 +1,7 @@
 /**
  * Test set-up for the run-* end-to-end tests (and by hand: `npx tsx tests/e2e/run-fixtures.ts`
- * with DATABASE_URL set): a program for the demo trunnion part with two draft revisions
- * written by the demo programmer — revision 1 as generated, revision 2 with the slow-touch
+ * with DATABASE_URL set): a program for the demo manifold on the trunnion with two draft
+ * revisions written by the demo programmer-reviewer — revision 1 as generated, revision 2 with the slow-touch
  * feed of one feature changed — planned, posted and verified by the engine. Also turns
  * simulated trip points back into the control's TRIP log lines (machine frame).
  */
@@ -20,14 +20,15 @@ import { verifyProgram } from '@/lib/program/verify';
 import type { Plan } from '@/lib/program/plan-schema';
 import { engineMachineFor } from '@/lib/validation/machines';
 
-export const FIXTURE_PART = 'FH-2210';
+export const FIXTURE_PART = 'FH-1042';
 export const FIXTURE_MACHINE = 'T5-1 AC trunnion';
 export const FIXTURE_PROBE = 'TP-1 Ø4 ruby, 50 mm';
-export const AUTHOR_EMAIL = 'piet.marlowe@fernhollow.example';
+/** Mira Lund holds programmer and reviewer: the author who must not approve her own revision. */
+export const AUTHOR_EMAIL = 'mira.lund@fernhollow.example';
 
 const orU = <T>(v: T | null): T | undefined => (v === null ? undefined : v);
 
-export interface Fixture { programId: string; revisionIds: [string, string]; part: Part; probe: Probe; machine: Machine; plan: Plan; partId: string; machineId: string }
+export interface Fixture { name: string; repeatability2Sigma: number; programId: string; revisionIds: [string, string]; part: Part; probe: Probe; machine: Machine; plan: Plan; partId: string; machineId: string }
 
 async function loadPart(partNumber: string): Promise<{ id: string; part: Part; workspaceId: string }> {
   const db = getDb();
@@ -45,12 +46,12 @@ async function loadPart(partNumber: string): Promise<{ id: string; part: Part; w
   return { id: p.id, part, workspaceId: p.workspaceId };
 }
 
-export async function createFixtureProgram(name = `Op30 check ${uuidv4().slice(0, 6)}`): Promise<Fixture> {
+export async function createFixtureProgram(name = `Op30 check ${uuidv4().slice(0, 6)}`, authorEmail = AUTHOR_EMAIL): Promise<Fixture> {
   const db = getDb();
   const { id: partId, part, workspaceId } = await loadPart(FIXTURE_PART);
   const [m] = await db.select().from(t.machines).where(and(eq(t.machines.workspaceId, workspaceId), eq(t.machines.name, FIXTURE_MACHINE))).limit(1);
   const [pr] = await db.select().from(t.probes).where(and(eq(t.probes.workspaceId, workspaceId), eq(t.probes.name, FIXTURE_PROBE))).limit(1);
-  const [author] = await db.select().from(t.users).where(eq(t.users.email, AUTHOR_EMAIL)).limit(1);
+  const [author] = await db.select().from(t.users).where(eq(t.users.email, authorEmail)).limit(1);
   if (!m?.currentVersionId || !pr || !author) throw new Error('demo machine, probe or programmer missing: run the seed first');
   const [v] = await db.select().from(t.machineVersions).where(eq(t.machineVersions.id, m.currentVersionId)).limit(1);
   if (!v) throw new Error('machine version missing');
@@ -59,31 +60,25 @@ export async function createFixtureProgram(name = `Op30 check ${uuidv4().slice(0
   const plan = planProgram({ part, probe, machine });
   const post = requirePost(v.postId);
   const text1 = postProgram({ plan, part, probe, machine, postprocessor: v.postId }, post);
-  // Revision 2: the measuring feed of the last touch point changed by hand.
-  const last = plan.touchPoints[plan.touchPoints.length - 1];
-  const lines = text1.split('\n');
-  const recordAt = last ? lines.findIndex((l) => l.toLowerCase().includes(last.uuid)) : -1;
-  let changed = false;
-  for (let i = recordAt; i > 0 && !changed; i -= 1) {
-    const l = lines[i] ?? '';
-    if (/F\d/.test(l) && !l.startsWith('(')) { lines[i] = l.replace(/F(\d+)/, (_s, n: string) => `F${Number(n) + 5}`); changed = true; }
-  }
-  const text2 = lines.join('\n');
+  // Revision 2: planned again with a 1 mm longer approach (every start point moves).
+  const plan2 = planProgram({ part, probe: { ...probe, approach: probe.approach + 1 }, machine });
+  const text2 = postProgram({ plan: plan2, part, probe: { ...probe, approach: probe.approach + 1 }, machine, postprocessor: v.postId }, post);
   const now = new Date();
   const programId = uuidv4();
   const revisionIds: [string, string] = [uuidv4(), uuidv4()];
   await db.transaction(async (tx) => {
     await tx.insert(t.programs).values({ id: programId, workspaceId, name, partId, machineId: m.id, machineVersionId: v.id, probeId: pr.id, postId: v.postId, createdBy: author.id, createdAt: now, updatedAt: now });
-    for (const [i, text] of [text1, text2].entries()) {
-      const findings = verifyProgram({ program: text, part, probe, machine, plan }, post).findings;
+    const versions = [{ text: text1, plan, probe }, { text: text2, plan: plan2, probe: { ...probe, approach: probe.approach + 1 } }];
+    for (const [i, { text, plan: p, probe: pb }] of versions.entries()) {
+      const findings = verifyProgram({ program: text, part, probe: pb, machine, plan: p }, post).findings;
       await tx.insert(t.revisions).values({
-        id: revisionIds[i] as string, workspaceId, programId, number: i + 1, authorId: author.id, message: i === 0 ? 'generated' : 'slower last touch',
-        status: 'draft', programText: text, sha256: createHash('sha256').update(text).digest('hex'), plan, findings, createdAt: new Date(now.getTime() + i),
+        id: revisionIds[i] as string, workspaceId, programId, number: i + 1, authorId: author.id, message: i === 0 ? 'generated' : 'approach 1 mm longer',
+        status: 'draft', programText: text, sha256: createHash('sha256').update(text).digest('hex'), plan: p, findings, createdAt: new Date(now.getTime() + i),
       });
-      await tx.insert(t.touchPoints).values(plan.touchPoints.map((tp) => ({ id: uuidv4(), workspaceId, revisionId: revisionIds[i] as string, uuid: tp.uuid, featureId: tp.featureUuid, seq: tp.seq, geometry: { surface: tp.surface, normal: tp.normal, direction: tp.direction, target: tp.target, start: tp.start, end: tp.end, toolAxis: tp.toolAxis }, axes: tp.axes })));
+      await tx.insert(t.touchPoints).values(p.touchPoints.map((tp) => ({ id: uuidv4(), workspaceId, revisionId: revisionIds[i] as string, uuid: tp.uuid, featureId: tp.featureUuid, seq: tp.seq, geometry: { surface: tp.surface, normal: tp.normal, direction: tp.direction, target: tp.target, start: tp.start, end: tp.end, toolAxis: tp.toolAxis }, axes: tp.axes })));
     }
   });
-  return { programId, revisionIds, part, probe, machine, plan, partId, machineId: m.id };
+  return { name, repeatability2Sigma: pr.repeatability2SigmaMm, programId, revisionIds, part, probe, machine, plan: plan2, partId, machineId: m.id };
 }
 
 /** Stylus-centre trip points (part frame) → "TRIP uuid X… Y… Z… A… C…" as the control writes them. */
