@@ -10,7 +10,7 @@
  */
 import { addScaled, cross, dot, GeometryError, normalize, perpendicular, type Vec3 } from '../geometry/vec3';
 import { prepareMachine, type PreparedMachine } from '../kinematics/machine';
-import { linearAxesFor, solveOrientation, solutionsFor, type OrientationResult } from '../kinematics/inverse';
+import { linearMapFor, solveOrientation, solutionsFor, type OrientationResult } from '../kinematics/inverse';
 import type { AxisValues } from '../kinematics/schema';
 import type { Plan, PlanWarning, TouchPoint } from '../program/plan-schema';
 import type { Feature } from './schema';
@@ -147,8 +147,9 @@ function pickRotaries(pm: PreparedMachine, it: Planned, orientation: Orientation
 }
 
 function outsideTravel(pm: PreparedMachine, pts: Vec3[], rot: AxisValues): { code: string; message: string } | null {
+  const map = linearMapFor(pm, rot);
   for (const p of pts) {
-    const lin = linearAxesFor(pm, p, rot);
+    const lin = map(p);
     for (const w of ['X', 'Y', 'Z'] as const) {
       const [lo, hi] = pm.machine.linear[w];
       if (lin[w] < lo - 1e-9 || lin[w] > hi + 1e-9) {
@@ -161,6 +162,7 @@ function outsideTravel(pm: PreparedMachine, pts: Vec3[], rot: AxisValues): { cod
 
 function emitPoints(it: Planned, r: number, overtravel: number, pm: PreparedMachine, rot: AxisValues, out: TouchPoint[]): void {
   const key = geometryKey(it.f);
+  const map = linearMapFor(pm, rot);
   it.contacts.forEach((c, i) => {
     const target = addScaled(c.surface, c.normal, r);
     const start = it.starts[i]!;
@@ -175,7 +177,7 @@ function emitPoints(it: Planned, r: number, overtravel: number, pm: PreparedMach
       start,
       end: addScaled(target, c.normal, -overtravel),
       toolAxis: it.axis,
-      axes: { ...linearAxesFor(pm, start, rot), ...rot },
+      axes: { ...map(start), ...rot },
     });
   });
 }

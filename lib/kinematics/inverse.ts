@@ -146,6 +146,25 @@ export function linearAxesFor(machine: Machine | PreparedMachine, tipP: Vec3, ro
   return { X: tipM[0] - h.tip[0], Y: tipM[1] - h.tip[1], Z: tipM[2] - h.tip[2] };
 }
 
+/**
+ * `linearAxesFor` at fixed rotary angles as a map for many points: at fixed angles the
+ * tip → linear axes relation is affine, so it is sampled once at the origin and the three
+ * unit points and then applied (rounding below 1e-12 mm for part sizes of metres).
+ */
+export function linearMapFor(machine: Machine | PreparedMachine, rotaries: AxisValues): (tipP: Vec3) => { X: number; Y: number; Z: number } {
+  const pm = prepareMachine(machine);
+  const o = linearAxesFor(pm, [0, 0, 0], rotaries);
+  const c = ([[1, 0, 0], [0, 1, 0], [0, 0, 1]] as Vec3[]).map((e) => {
+    const v = linearAxesFor(pm, e, rotaries);
+    return [v.X - o.X, v.Y - o.Y, v.Z - o.Z] as Vec3;
+  }) as [Vec3, Vec3, Vec3];
+  return (p) => ({
+    X: o.X + c[0][0] * p[0] + c[1][0] * p[1] + c[2][0] * p[2],
+    Y: o.Y + c[0][1] * p[0] + c[1][1] * p[1] + c[2][1] * p[2],
+    Z: o.Z + c[0][2] * p[0] + c[1][2] * p[1] + c[2][2] * p[2],
+  });
+}
+
 /** Every angle equivalent to `raw` that the rotary may take (nearest `prev` when continuous). */
 export function equivalentAngles(r: PreparedRotary, raw: number, prev: number, free: boolean): number[] {
   if (r.min === null || r.max === null) return [free ? raw : prev + wrapDeg(raw - prev)];

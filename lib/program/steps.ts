@@ -11,7 +11,7 @@
  */
 import { distance, type Vec3 } from '../geometry/vec3';
 import { partToMachine } from '../kinematics/forward';
-import { linearAxesFor } from '../kinematics/inverse';
+import { linearMapFor } from '../kinematics/inverse';
 import { prepareMachine, type PreparedMachine } from '../kinematics/machine';
 import type { AxisValues, Machine } from '../kinematics/schema';
 import type { Feature, Part, Probe } from '../features/schema';
@@ -55,7 +55,6 @@ function runs(points: TouchPoint[]): TouchPoint[][] {
   return out;
 }
 
-const linear = (pm: PreparedMachine, p: Vec3, rot: AxisValues): AxisValues => linearAxesFor(pm, p, rot);
 const rotariesOf = (pm: PreparedMachine, axes: AxisValues): AxisValues => Object.fromEntries(pm.rotaries.map((r) => [r.name, axes[r.name] ?? 0]));
 const sameRotaries = (a: AxisValues | null, b: AxisValues): boolean => a !== null && Object.keys(b).every((k) => Math.abs((a[k] ?? 0) - (b[k] ?? 0)) < 1e-9);
 const xyz = (a: AxisValues): Vec3 => [a.X ?? 0, a.Y ?? 0, a.Z ?? 0];
@@ -86,7 +85,8 @@ export function buildProgram(plan: Plan, part: Part, probe: Probe, machine: Mach
     safeByAxis.set(key, safeH);
     const path = featurePath(f, run.map((tp) => tp.start), clearances.get(f.uuid) ?? probe.clearance, t, safeH);
     steps.push({ kind: 'feature', label: f.label, type: f.type, points: run.length });
-    const safeIn = linear(pm, path.safeIn, r);
+    const linear = linearMapFor(pm, r);
+    const safeIn = linear(path.safeIn);
     if (!sameRotaries(rot, r)) {
       if (pm.rotaries.length > 0 || at === null) steps.push({ kind: 'rapid', to: { Z: zTop } });
       if (pm.rotaries.length > 0) steps.push({ kind: 'rotary', to: r });
@@ -95,16 +95,16 @@ export function buildProgram(plan: Plan, part: Part, probe: Probe, machine: Mach
     }
     steps.push({ kind: 'rapid', to: safeIn });
     at = xyz(safeIn);
-    protectedTo(linear(pm, path.entry, r));
+    protectedTo(linear(path.entry));
     const back = backoffDistance(probe);
     run.forEach((tp, i) => {
-      for (const b of path.before[i] ?? []) protectedTo(linear(pm, b, r));
-      const start = linear(pm, tp.start, r);
+      for (const b of path.before[i] ?? []) protectedTo(linear(b));
+      const start = linear(tp.start);
       const gap = at ? distance(at, xyz(start)) : Infinity;
       // starts closer than a probe move allows (e.g. a pair across a narrow slot): go via a point 1 mm up the axis
-      if (gap >= 1e-9 && gap < MIN_PROBE_MOVE_MM) protectedTo(linear(pm, [tp.start[0] + t[0], tp.start[1] + t[1], tp.start[2] + t[2]], r));
+      if (gap >= 1e-9 && gap < MIN_PROBE_MOVE_MM) protectedTo(linear([tp.start[0] + t[0], tp.start[1] + t[1], tp.start[2] + t[2]]));
       protectedTo(start);
-      const end = linear(pm, tp.end, r);
+      const end = linear(tp.end);
       steps.push({ kind: 'touch', to: end, feed: probe.fastFeed, pass: 'fast' });
       const n = partToMachine(pm, r, tp.normal, true);
       steps.push({ kind: 'backoff', by: { X: n[0] * back, Y: n[1] * back, Z: n[2] * back }, feed: probe.fastFeed });
@@ -112,10 +112,10 @@ export function buildProgram(plan: Plan, part: Part, probe: Probe, machine: Mach
       steps.push({ kind: 'record', uuid: tp.uuid });
       steps.push({ kind: 'retract', to: start, feed: probe.fastFeed });
       at = xyz(start);
-      for (const a of path.after[i] ?? []) protectedTo(linear(pm, a, r));
+      for (const a of path.after[i] ?? []) protectedTo(linear(a));
     });
-    protectedTo(linear(pm, path.exit, r));
-    protectedTo(linear(pm, path.safeOut, r));
+    protectedTo(linear(path.exit));
+    protectedTo(linear(path.safeOut));
   }
   steps.push({ kind: 'rapid', to: { Z: zTop } });
   return { steps, zTop, rotaryNames: pm.rotaries.map((x) => x.name).sort(), touchPoints: plan.touchPoints.length, features: runs(plan.touchPoints).length };

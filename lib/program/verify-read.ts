@@ -17,7 +17,20 @@ export type ReadLine =
   | { t: 'unknown'; text: string };
 
 const escapeRe = (s: string) => s.replace(/[.*+?^${}()|[\]\\#]/g, '\\$&');
-const TOKEN = /^([A-Z])([-+]?(?:\d+\.?\d*|\.\d+))$/;
+/** The number after a word's letter (A–Z then an optionally signed decimal), or null. */
+function numberOf(tok: string): number | null {
+  const c = tok.charCodeAt(0);
+  if (c < 65 || c > 90 || tok.length < 2) return null;
+  let digits = 0;
+  for (let i = 1; i < tok.length; i++) {
+    const d = tok.charCodeAt(i);
+    if (d >= 48 && d <= 57) digits++;
+    else if (!(d === 46 || ((d === 45 || d === 43) && i === 1))) return null;
+  }
+  if (digits === 0) return null;
+  const v = Number(tok.slice(1));
+  return Number.isFinite(v) ? v : null;
+}
 
 export interface Reader { read: (line: string) => ReadLine }
 
@@ -62,15 +75,15 @@ export function makeReader(def: PostDefinition, grammar: PostGrammar, rotaryName
       const unknown: string[] = [];
       for (const tok of line.split(' ')) {
         if (tok === '') continue;
-        const m = TOKEN.exec(tok);
-        if (!m) { unknown.push(tok); continue; }
-        const letter = m[1] as string;
+        const letter = tok[0] as string;
+        const value = numberOf(tok);
+        if (value === null) { unknown.push(tok); continue; }
         if (letter === 'G' || letter === 'M') {
-          const code = `${letter}${Number(m[2])}`;
+          const code = `${letter}${value}`;
           if (known.has(code) || known.has(tok)) codes.push(known.has(tok) ? tok : code);
           else unknown.push(tok);
         } else if (axisWords.has(letter) || letter === 'F') {
-          w[letter] = Number(m[2]);
+          w[letter] = value;
         } else if (known.has(tok)) {
           codes.push(tok);
         } else {

@@ -32,6 +32,9 @@ export const PLAN_TOL_MM = 0.01;
 const SAFE_TOL_MM = 0.01;
 const Z_TOP_TOL_MM = 0.001;
 
+/** Replay frame at one rotary setting: tip_P = o + x·X + y·Y + z·Z, tool axis, safe-plane height. */
+interface Frame { o: Vec3; x: Vec3; y: Vec3; z: Vec3; axis: Vec3; safe: number }
+
 type Kind = 'rapid' | 'feed' | 'protected' | 'touch';
 type Phase = 'free' | 'afterFast' | 'afterBackoff' | 'afterSlow' | 'afterRecord';
 
@@ -42,7 +45,7 @@ interface Ctx {
   safe: Map<string, number>;
   clearances: Map<string, number>;
   /** Replay frames by rotary setting (see partPose). */
-  frames: Map<string, { o: Vec3; x: Vec3; y: Vec3; z: Vec3; axis: Vec3 }>;
+  frames: Map<string, Frame>;
   findings: Finding[];
 }
 
@@ -111,6 +114,8 @@ function replay(lines: ReadLine[], ctx: Ctx, post: ReadyPost, add: (l: number, c
   let phase: Phase = 'free';
   let lastTouch: TouchPoint | null = null;
   const needsCheck = post.bundle.grammar.touchCheck !== null;
+  let frame: Frame | null = null;
+  let lastPose: Pose | null = null;
   lines.forEach((l, i) => {
     const ln = i + 1;
     if (l.t === 'unknown') { add(ln, 'UNKNOWN_WORD', `"${l.text.slice(0, 60)}" is not a statement the ${post.bundle.definition.id} post writes`); return; }
@@ -143,27 +148,34 @@ function replay(lines: ReadLine[], ctx: Ctx, post: ReadyPost, add: (l: number, c
       add(ln, 'CHECK_MISSING', kind === 'protected' ? 'protected move without the unexpected-trigger check after it' : 'touch without the no-trigger check after it');
     }
     if (!known) return;
-    const a = partPose(ctx, from);
-    const b = partPose(ctx, pos);
+    if (!frame || rotaryWords(l.words, ctx)) frame = frameAt(ctx, pos);
+    const a = lastPose && !rotaryMoved ? lastPose : poseIn(frameAt(ctx, from), from);
+    const b = poseIn(frame, pos);
+    lastPose = b;
     const tp = ctx.points.get(ctxUuid.next[i] ?? '') ?? null;
     const left = ctx.points.get(ctxUuid.prev[i] ?? '') ?? null;
     if (kind === 'touch') {
       phase = measureMove(ctx, phase, tp, a.tip, b.tip, ln, add);
       lastTouch = tp;
       // replay the trip at nominal contact (the stylus stops at the surface, not at `end`)
-      if (tp && onProbingLine(tp, b.tip, tp.end)) Object.assign(pos, linearAxesFor(ctx.pm, tp.target, pos));
+      if (tp && onProbingLine(tp, b.tip, tp.end)) {
+        Object.assign(pos, linearAxesFor(ctx.pm, tp.target, pos));
+        lastPose = null;
+      }
       return;
     }
     if (phase !== 'free') {
       phase = afterTouch(ctx, phase, lastTouch, kind, incremental, b.tip, ln, add);
       if (phase === 'free' || phase === 'afterBackoff') return;
     }
-    checkPath(ctx, kind, from, pos, a, b, [tp, left], ln, add);
+    checkPath(ctx, kind, from, pos, a, b, frame.safe, [tp, left], ln, add);
   });
   for (const tp of ctx.points.values()) {
     if (!measured.has(tp.uuid.toLowerCase())) add(lines.length, 'POINT_NOT_MEASURED', `touch point ${tp.seq} (${tp.uuid}) of the plan is never measured`);
   }
 }
+
+const rotaryWords = (w: Record<string, number>, ctx: Ctx): boolean => ctx.pm.rotaries.some((r) => r.name in w);
 
 function checkFollows(next: ReadLine | undefined, kind: 'protected' | 'touch', needsTouchCheck: boolean, post: ReadyPost): boolean {
   if (kind === 'protected') return next?.t === 'protectedCheck';
@@ -187,16 +199,20 @@ function checkLimits(ctx: Ctx, pos: AxisValues, ln: number, add: (l: number, c: 
  * Forward kinematics for replay: at fixed rotary angles fk is affine in X, Y, Z, so the
  * map is built once per rotary setting (from fk itself) and applied per line.
  */
-function partPose(ctx: Ctx, axes: AxisValues): Pose {
+function frameAt(ctx: Ctx, axes: AxisValues): Frame {
   let key = '';
   for (const r of ctx.pm.rotaries) key += `${axes[r.name] ?? 0},`;
   let m = ctx.frames.get(key);
   if (!m) {
     const base = forwardKinematics(ctx.pm, { ...axes, X: 0, Y: 0, Z: 0 });
     const col = (k: 'X' | 'Y' | 'Z') => sub(forwardKinematics(ctx.pm, { ...axes, X: 0, Y: 0, Z: 0, [k]: 1 }).tip, base.tip);
-    m = { o: base.tip, x: col('X'), y: col('Y'), z: col('Z'), axis: base.axis };
+    m = { o: base.tip, x: col('X'), y: col('Y'), z: col('Z'), axis: base.axis, safe: safeHeight(ctx.part, ctx.probe, base.axis, ctx.clearances) };
     ctx.frames.set(key, m);
   }
+  return m;
+}
+
+function poseIn(m: Frame, axes: AxisValues): Pose {
   const X = axes.X ?? 0;
   const Y = axes.Y ?? 0;
   const Z = axes.Z ?? 0;
@@ -204,13 +220,6 @@ function partPose(ctx: Ctx, axes: AxisValues): Pose {
     tip: [m.o[0] + m.x[0] * X + m.y[0] * Y + m.z[0] * Z, m.o[1] + m.x[1] * X + m.y[1] * Y + m.z[1] * Z, m.o[2] + m.x[2] * X + m.y[2] * Y + m.z[2] * Z],
     axis: m.axis,
   };
-}
-
-function safeAt(ctx: Ctx, t: Vec3): number {
-  const key = t.map((v) => v.toFixed(6)).join();
-  let h = ctx.safe.get(key);
-  if (h === undefined) { h = safeHeight(ctx.part, ctx.probe, t, ctx.clearances); ctx.safe.set(key, h); }
-  return h;
 }
 
 function measureMove(ctx: Ctx, phase: Phase, tp: TouchPoint | null, a: Vec3, b: Vec3, ln: number, add: (l: number, c: string, m: string) => void): Phase {
@@ -251,9 +260,9 @@ function afterTouch(ctx: Ctx, phase: Phase, tp: TouchPoint | null, kind: Kind, i
 }
 
 /** A move below the safe plane must be along the tool axis, inside a bore's or slot's free space, or at an exterior feature's clearance. */
-function checkPath(ctx: Ctx, kind: Kind, from: AxisValues, to: AxisValues, a: Pose, b: Pose, near: (TouchPoint | null)[], ln: number, add: (l: number, c: string, m: string) => void) {
+function checkPath(ctx: Ctx, kind: Kind, from: AxisValues, to: AxisValues, a: Pose, b: Pose, safe: number, near: (TouchPoint | null)[], ln: number, add: (l: number, c: string, m: string) => void) {
   const t = b.axis;
-  const H = safeAt(ctx, t) - SAFE_TOL_MM;
+  const H = safe - SAFE_TOL_MM;
   const high = (p: Vec3, z: number | undefined) => dot(p, t) >= H || (z ?? -Infinity) >= ctx.zTop - Z_TOP_TOL_MM;
   const aHigh = high(a.tip, from.Z);
   const bHigh = high(b.tip, to.Z);

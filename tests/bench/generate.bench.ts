@@ -22,7 +22,7 @@ function uuidFor(i: number): string {
 }
 
 /** 1,000 features on a 1000 × 1000 block: per face a grid of cells, each a bore, boss, slot or pad. */
-function generatedInput(): PlanInput {
+export function generatedInput(): PlanInput {
   const s = 0.5;
   const c = Math.sqrt(3) / 2;
   const faces: { n: Vec3; o: Vec3; u: Vec3 }[] = [
