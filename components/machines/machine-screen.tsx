@@ -17,7 +17,7 @@ export function MachineScreen({ machine, canEdit, posts }: { machine: MachineDet
   const [conflict, setConflict] = useState<string | null>(null);
   return (
     <div className="space-y-6">
-      <p className="text-small">Version <strong>{machine.version}</strong> · {machine.layout} · post <code className="font-mono">{machine.record.post}</code> · {machine.model.rotaries.map(describeRotary).join('; ') || 'no rotary axes'}</p>
+      <p className="text-small" data-testid="machine-version">Version <strong>{machine.version}</strong> · {machine.layout} · post <code className="font-mono">{machine.record.post}</code> · {machine.model.rotaries.map(describeRotary).join('; ') || 'no rotary axes'}</p>
       <section aria-label="3D view of the machine"><MachineView3D machine={machine.model} /></section>
       <PosePanel machineId={machine.id} axisWords={['X', 'Y', 'Z', ...machine.model.rotaries.map((r) => r.name)]} />
       <section className="card space-y-3 p-4" aria-label="Machine model">

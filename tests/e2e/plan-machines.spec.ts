@@ -32,11 +32,11 @@ test('engineer creates an AC trunnion from a preset, reverses C, tries a pose', 
   // Forward: A = 30° tilts the tool axis in the part frame away from +Z.
   await page.getByLabel('A', { exact: true }).fill('30');
   await page.getByRole('button', { name: 'Compute tip' }).click();
-  await expect(page.getByTestId('fk-result')).toContainText('tool axis');
+  await expect(page.getByTestId('fk-result')).toContainText('tool axis', { timeout: 30_000 });
   // Inverse: a tilted axis has solutions, the chosen one marked; an impossible one says why in words.
   await page.getByLabel('Tool axis i, j, k').fill('0, -0.5, 0.8660254');
   await page.getByRole('button', { name: 'Find every solution' }).click();
-  await expect(page.getByTestId('ik-result')).toContainText('chosen');
+  await expect(page.getByTestId('ik-result')).toContainText('chosen', { timeout: 30_000 });
   await page.screenshot({ path: 'test-results/screens/plan-machine-pose.png', fullPage: true });
   await page.getByLabel('Tool axis i, j, k').fill('0, 0, -1');
   await page.getByRole('button', { name: 'Find every solution' }).click();
