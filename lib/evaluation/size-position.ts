@@ -103,34 +103,10 @@ export function evaluatePosition(ctx: EvalContext, tol: Tolerance, m: FeatureMea
   if ('error' in drf) return notEvaluated(drf.error);
   const origin = drf.nominal.origin;
   const temp = correctLength(1, ctx.input.conditions.partTemperatureC, ctx.material);
-  const s = temp.value;
-  const place = (p: Vec3): Vec3 => addScaled(origin, sub(drf.alignment.point(p), origin), s);
-  const e = m.element;
-  let value: number;
-  let deviation: Vec3;
-  let nominalPoint: Vec3;
-  let kind: string;
-  if (e.kind === 'axis' && (f.type === 'bore' || f.type === 'boss')) {
-    const a = normalize(f.axis);
-    nominalPoint = f.center;
-    const offs = e.ends.map((p) => norm(reject(sub(place(p), f.center), a)));
-    value = 2 * Math.max(...offs);
-    deviation = reject(sub(place(e.point), f.center), a);
-    kind = e.ends.length > 1 ? 'diametral zone, axis at both ends of the measured length' : 'diametral zone, centre of one level';
-  } else if (e.kind === 'sphere' && f.type === 'sphere') {
-    nominalPoint = f.center;
-    deviation = sub(place(e.center), f.center);
-    value = 2 * norm(deviation);
-    kind = 'spherical zone';
-  } else if (e.kind === 'slot' && (f.type === 'slot' || f.type === 'web')) {
-    nominalPoint = f.center;
-    const d = dot(sub(place(e.mid), f.center), e.widthDir);
-    deviation = scale(e.widthDir, d);
-    value = 2 * Math.abs(d);
-    kind = 'zone across the width (mid-plane)';
-  } else {
-    return notEvaluated(`position is not evaluated for a ${f.type}`);
-  }
+  const at20 = locate(m, (p) => addScaled(origin, sub(drf.alignment.point(p), origin), temp.value));
+  if (!at20) return notEvaluated(`position is not evaluated for a ${f.type}`);
+  const asMeasured = locate(m, (p) => drf.alignment.point(p)) as Located;
+  const { value, deviation, kind } = at20;
   const b = bonusFor(ctx, tol, m, tol.value);
   if (b && 'error' in b) return notEvaluated(b.error);
   const bonus = b?.bonus ?? 0;
@@ -138,7 +114,37 @@ export function evaluatePosition(ctx: EvalContext, tol: Tolerance, m: FeatureMea
   return {
     value, lower: null, upper: tol.value + bonus, method: `${kind} in the ${frameText}; ${m.method}`,
     bonus: b ? bonus : undefined, virtualCondition: b?.virtualCondition, materialCondition: tol.material ?? 'RFS',
-    message: b?.note, deviation, lengthMm: Math.max(norm(sub(nominalPoint, origin)), measuredSize(m) ?? 0),
-    temperatureCorrection: { ...temp.correction, correction: 0, note: temp.correction.applied ? `location from the datum origin scaled by ${s.toFixed(8)} to 20 °C` : temp.correction.note },
+    message: b?.note, deviation, lengthMm: Math.max(norm(sub(centerOf(f), origin)), measuredSize(m) ?? 0),
+    temperatureCorrection: {
+      ...temp.correction, correction: value - asMeasured.value,
+      note: temp.correction.applied ? `locations from the datum origin scaled by ${temp.value.toFixed(8)} to 20 °C; the value changed by ${(value - asMeasured.value).toFixed(6)} mm` : temp.correction.note,
+    },
   };
+}
+
+interface Located { value: number; deviation: Vec3; kind: string }
+
+const centerOf = (f: Feature): Vec3 => (f.type === 'plane' ? f.origin : f.center);
+
+/** Location value of a measured feature with its points placed by `place` (alignment, temperature). */
+function locate(m: FeatureMeasurement, place: (p: Vec3) => Vec3): Located | null {
+  const f = m.feature;
+  const e = m.element;
+  if (e.kind === 'axis' && (f.type === 'bore' || f.type === 'boss')) {
+    const a = normalize(f.axis);
+    const offs = e.ends.map((p) => norm(reject(sub(place(p), f.center), a)));
+    return {
+      value: 2 * Math.max(...offs), deviation: reject(sub(place(e.point), f.center), a),
+      kind: e.ends.length > 1 ? 'diametral zone, axis at both ends of the measured length' : 'diametral zone, centre of one level',
+    };
+  }
+  if (e.kind === 'sphere' && f.type === 'sphere') {
+    const deviation = sub(place(e.center), f.center);
+    return { value: 2 * norm(deviation), deviation, kind: 'spherical zone' };
+  }
+  if (e.kind === 'slot' && (f.type === 'slot' || f.type === 'web')) {
+    const d = dot(sub(place(e.mid), f.center), e.widthDir);
+    return { value: 2 * Math.abs(d), deviation: scale(e.widthDir, d), kind: 'zone across the width (mid-plane)' };
+  }
+  return null;
 }
