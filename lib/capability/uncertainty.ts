@@ -7,7 +7,7 @@
  * (uncertainty of the part temperature and of the expansion coefficient; an unmeasured
  * part is taken as anywhere within ±assumedRangeK of 20 °C).
  * Sensitivities to the repeatability are those of least-squares estimates from n
- * evenly spread points [independently computed]: radius σ/√n, centre coordinate
+ * evenly spread points (checked by seeded Monte Carlo in tests/unit/capability): radius σ/√n, centre coordinate
  * σ·√(2/n); a form or orientation value is the difference of two points (√2·σ).
  */
 import type { Characteristic } from '../features/schema';

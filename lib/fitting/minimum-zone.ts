@@ -9,7 +9,7 @@
  * set at the same orientation, so when the full set fits, the zone is the minimum.
  * The least-squares element is always a candidate: the result never exceeds its form.
  * (Characterisation: ISO 12781-1 / ISO 12181-1 minimum zone definitions [from memory];
- * support-set search as in Carr & Ferreira, Precision Engineering 17 (1995).)
+ * support-set search in the manner of Carr & Ferreira, Precision Engineering 17 (1995) [from memory].)
  */
 import type { CircleFit, PlaneFit } from './types';
 import { FitError } from './types';
