@@ -57,7 +57,7 @@ export function fitCircle(points: readonly Vec3[], hint?: Vec3): CircleFit {
   const flat = toFlat(points);
   let plane;
   try {
-    plane = fitPlaneFlat(flat, hint);
+    plane = fitPlaneFlat(flat, hint, false);
   } catch (e) {
     if (e instanceof FitError && (e.code === 'COLLINEAR_POINTS' || e.code === 'COINCIDENT_POINTS')) {
       throw new FitError('COLLINEAR_POINTS', 'the points lie on one line: no circle is defined');
