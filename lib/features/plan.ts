@@ -22,7 +22,7 @@ import { partClearances, probeRadius, safeHeight } from './clearance';
 import { featurePath, pathPoints } from './path';
 import { nearestNeighbourOrder } from './patterns';
 import { footprintSources } from './footprints';
-import { touchPointUuid } from './touch-point-uuid';
+import { geometryName, touchPointUuid } from './touch-point-uuid';
 
 interface Planned { f: Feature; axis: Vec3; contacts: Contact[]; starts: Vec3[] }
 interface Group { axis: Vec3; items: Planned[] }
@@ -161,7 +161,7 @@ function outsideTravel(pm: PreparedMachine, pts: Vec3[], rot: AxisValues): { cod
 }
 
 function emitPoints(it: Planned, r: number, overtravel: number, pm: PreparedMachine, rot: AxisValues, out: TouchPoint[]): void {
-  const key = geometryKey(it.f);
+  const key = geometryName(geometryKey(it.f));
   const map = linearMapFor(pm, rot);
   it.contacts.forEach((c, i) => {
     const target = addScaled(c.surface, c.normal, r);

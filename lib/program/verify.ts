@@ -134,22 +134,26 @@ function replay(lines: ReadLine[], ctx: Ctx, post: ReadyPost, add: (l: number, c
     if (l.codes.includes('G90')) incremental = false;
     const kind = classify(l, lines[i + 1], post) ?? modal;
     if (kind && kind !== 'touch' && kind !== 'protected') modal = kind;
-    const axisWords = Object.keys(l.words).filter((k) => k !== 'F');
-    if (axisWords.length === 0 || kind === null) return;
-    const from: AxisValues = { ...pos };
+    let nAxis = 0;
+    let linearWord = false;
+    for (const w in l.words) if (w !== 'F') { nAxis++; if (w === 'X' || w === 'Y' || w === 'Z') linearWord = true; }
+    if (nAxis === 0 || kind === null) return;
+    const hasRot = rotaryWords(l.words, ctx);
+    const fromZ = pos.Z;
+    const from: AxisValues | null = hasRot || !lastPose ? { ...pos } : null;
     const known = 'X' in pos && 'Y' in pos && 'Z' in pos;
-    for (const w of axisWords) pos[w] = incremental ? (pos[w] ?? 0) + l.words[w]! : l.words[w]!;
+    for (const w in l.words) if (w !== 'F') pos[w] = incremental ? (pos[w] ?? 0) + l.words[w]! : l.words[w]!;
     checkLimits(ctx, pos, ln, add);
-    const rotaryMoved = ctx.pm.rotaries.some((r) => r.name in l.words && Math.abs((from[r.name] ?? 0) - pos[r.name]!) > 1e-9);
-    if (rotaryMoved && ((from.Z ?? -Infinity) < ctx.zTop - Z_TOP_TOL_MM || axisWords.some((w) => 'XYZ'.includes(w)))) {
-      add(ln, 'ROTARY_BELOW_CLEARANCE', `rotary move with Z at ${(from.Z ?? NaN).toFixed(3)} or together with a linear move; rotaries may move only alone with Z at the top of its travel (${ctx.zTop})`);
+    const rotaryMoved = from !== null && hasRot && ctx.pm.rotaries.some((r) => r.name in l.words && Math.abs((from[r.name] ?? 0) - pos[r.name]!) > 1e-9);
+    if (rotaryMoved && ((fromZ ?? -Infinity) < ctx.zTop - Z_TOP_TOL_MM || linearWord)) {
+      add(ln, 'ROTARY_BELOW_CLEARANCE', `rotary move with Z at ${(fromZ ?? NaN).toFixed(3)} or together with a linear move; rotaries may move only alone with Z at the top of its travel (${ctx.zTop})`);
     }
     if ((kind === 'protected' || kind === 'touch') && !checkFollows(lines[i + 1], kind, needsCheck, post)) {
       add(ln, 'CHECK_MISSING', kind === 'protected' ? 'protected move without the unexpected-trigger check after it' : 'touch without the no-trigger check after it');
     }
     if (!known) return;
-    if (!frame || rotaryWords(l.words, ctx)) frame = frameAt(ctx, pos);
-    const a = lastPose && !rotaryMoved ? lastPose : poseIn(frameAt(ctx, from), from);
+    if (!frame || hasRot) frame = frameAt(ctx, pos);
+    const a = lastPose && !rotaryMoved ? lastPose : poseIn(frameAt(ctx, from ?? pos), from ?? pos);
     const b = poseIn(frame, pos);
     lastPose = b;
     const tp = ctx.points.get(ctxUuid.next[i] ?? '') ?? null;
@@ -168,7 +172,7 @@ function replay(lines: ReadLine[], ctx: Ctx, post: ReadyPost, add: (l: number, c
       phase = afterTouch(ctx, phase, lastTouch, kind, incremental, b.tip, ln, add);
       if (phase === 'free' || phase === 'afterBackoff') return;
     }
-    checkPath(ctx, kind, from, pos, a, b, frame.safe, [tp, left], ln, add);
+    checkPath(ctx, kind, fromZ, pos.Z, a, b, frame.safe, [tp, left], ln, add);
   });
   for (const tp of ctx.points.values()) {
     if (!measured.has(tp.uuid.toLowerCase())) add(lines.length, 'POINT_NOT_MEASURED', `touch point ${tp.seq} (${tp.uuid}) of the plan is never measured`);
@@ -260,12 +264,12 @@ function afterTouch(ctx: Ctx, phase: Phase, tp: TouchPoint | null, kind: Kind, i
 }
 
 /** A move below the safe plane must be along the tool axis, inside a bore's or slot's free space, or at an exterior feature's clearance. */
-function checkPath(ctx: Ctx, kind: Kind, from: AxisValues, to: AxisValues, a: Pose, b: Pose, safe: number, near: (TouchPoint | null)[], ln: number, add: (l: number, c: string, m: string) => void) {
+function checkPath(ctx: Ctx, kind: Kind, fromZ: number | undefined, toZ: number | undefined, a: Pose, b: Pose, safe: number, near: (TouchPoint | null)[], ln: number, add: (l: number, c: string, m: string) => void) {
   const t = b.axis;
   const H = safe - SAFE_TOL_MM;
   const high = (p: Vec3, z: number | undefined) => dot(p, t) >= H || (z ?? -Infinity) >= ctx.zTop - Z_TOP_TOL_MM;
-  const aHigh = high(a.tip, from.Z);
-  const bHigh = high(b.tip, to.Z);
+  const aHigh = high(a.tip, fromZ);
+  const bHigh = high(b.tip, toZ);
   if (aHigh && bHigh) return;
   if (kind === 'rapid') {
     add(ln, 'RAPID_BELOW_CLEARANCE', `rapid move to ${fmt(b.tip)} (part frame) below the safe plane ${(H + SAFE_TOL_MM).toFixed(3)} mm along the tool axis`);
