@@ -43,10 +43,6 @@ export interface RawResult {
 
 export const notEvaluated = (message: string, method = 'none'): RawResult => ({ value: null, lower: null, upper: null, method, message, lengthMm: 0 });
 
-export function featureMeasurement(ctx: EvalContext, featureUuid: string): MeasurementOrError | null {
-  return ctx.byFeature.get(featureUuid) ?? null;
-}
-
 export interface DatumAlignment { alignment: Alignment; nominal: Frame; measured: Frame; letters: string[] }
 
 /** The measured-to-nominal alignment for a tolerance's datums (identity without datums), or why not. */

@@ -91,8 +91,6 @@ function intersectAxis(d: { point: Vec3; dir: Vec3 }, origin: Vec3, z: Vec3): Ve
 /** Rigid map taking the measured frame onto the nominal one. */
 export interface Alignment { point(p: Vec3): Vec3; direction(v: Vec3): Vec3 }
 
-export const IDENTITY: Alignment = { point: (p) => p, direction: (v) => v };
-
 export function align(measured: Frame, nominal: Frame): Alignment {
   const local = (v: Vec3): Vec3 => [dot(v, measured.x), dot(v, measured.y), dot(v, measured.z)];
   const global = (l: Vec3): Vec3 => add(add(scale(nominal.x, l[0]), scale(nominal.y, l[1])), scale(nominal.z, l[2]));
