@@ -23,7 +23,7 @@ import { MULTI_ROLE_PERSON, PASSWORD, ROLE_PEOPLE, storageStateFor } from './sup
 import { signInByApi } from './support/sign-in';
 import { createFixtureProgram, tripLog, type Fixture } from './run-fixtures';
 
-test.describe.configure({ mode: 'serial' });
+test.describe.configure({ mode: 'serial', timeout: 180_000 });
 
 let fx: Fixture;
 const shot = (page: Page, name: string) => page.screenshot({ path: `test-results/e2e/run-loop-${name}.png`, fullPage: true });
@@ -72,7 +72,7 @@ test('submit, e-mail, diff, four-eyes refusal, approval', async ({ browser }) =>
   await page.goto(`/reviews/${rev2}`);
   await expect(page.getByText('You wrote this revision: another reviewer must approve it.')).toBeVisible();
   await page.getByRole('button', { name: 'Approve' }).click();
-  await expect(page.getByText('You wrote this revision; another reviewer must approve it.')).toBeVisible();
+  await expect(page.getByText('You wrote this revision; another reviewer must approve it.')).toBeVisible({ timeout: 30_000 });
   await author.close();
 
   const reviewer = await browser.newContext({ storageState: storageStateFor('reviewer') });
@@ -85,7 +85,7 @@ test('submit, e-mail, diff, four-eyes refusal, approval', async ({ browser }) =>
   await shot(rp, 'review-diff');
   await rp.getByLabel('Comment').fill('Checked the slower last touch against the drawing.');
   await rp.getByRole('button', { name: 'Approve' }).click();
-  await expect(rp.getByText(/Approved\. The revision is locked/)).toBeVisible();
+  await expect(rp.getByText(/Approved\. The revision is locked/)).toBeVisible({ timeout: 30_000 });
   await expect(rp.locator('[data-status="approved"]').first()).toBeVisible();
   await waitForMail(MULTI_ROLE_PERSON.email, `Approved: FH-1042 · ${fx.name} revision 2`);
   await reviewer.close();
@@ -121,8 +121,8 @@ test('an upload of a simulated mis-made part shows the engine\'s verdict; a wron
   await page.getByLabel('Part serial or lot').fill('MB-0001');
   await page.getByTestId('results-file').setInputFiles(badPath);
   await page.getByRole('button', { name: 'Upload and evaluate' }).click();
-  await expect(page.getByRole('alert')).toContainText('Nothing was stored');
-  await expect(page.getByTestId('upload-problems')).toContainText('line 3:');
+  await expect(page.getByTestId('upload-message')).toContainText('Nothing was stored', { timeout: 30_000 });
+  await expect(page.getByTestId('upload-problems')).toContainText('line 3:', { timeout: 30_000 });
   await shot(page, 'upload-refused');
 
   const goodPath = info.outputPath('trips.txt');
@@ -130,7 +130,7 @@ test('an upload of a simulated mis-made part shows the engine\'s verdict; a wron
   await page.getByTestId('results-file').setInputFiles(goodPath);
   await page.getByLabel('Part temperature (°C, optional)').fill('');
   await page.getByRole('button', { name: 'Upload and evaluate' }).click();
-  await page.waitForURL(/\/runs\/[0-9a-f-]{36}$/);
+  await page.waitForURL(/\/runs\/[0-9a-f-]{36}$/, { timeout: 60_000 });
   const table = page.getByTestId('results-table');
   await expect(table).toBeVisible();
   for (const r of expected.results) {
@@ -160,23 +160,23 @@ test('trends after several runs, the trace view and the live page', async ({ bro
   const page = await ctx.newPage();
   await page.goto(`/trends/${fx.partId}`);
   const card = page.getByTestId('trend-card').filter({ hasText: 'B2 · diameter' });
-  await expect(card.getByTestId('run-chart')).toBeVisible();
+  await expect(card.getByTestId('run-chart')).toBeVisible({ timeout: 60_000 });
   await expect(card.getByTestId('cpk')).not.toHaveText('—');
   await shot(page, 'trends');
 
   await page.goto('/runs');
   await page.getByRole('link', { name: 'MB-109' }).click();
   await page.getByTestId('results-table').locator('tr').filter({ hasText: 'B2' }).getByRole('link', { name: 'position' }).click();
-  await expect(page.getByRole('heading', { name: /Trace — FH-1042, balloon B2 position/ })).toBeVisible();
+  await expect(page.getByRole('heading', { name: /Trace — FH-1042, balloon B2 position/ })).toBeVisible({ timeout: 60_000 });
   await expect(page.getByTestId('trace-revision').first()).toContainText('touch points on B2');
   await expect(page.getByTestId('trace-runs')).toContainText('program line');
   await shot(page, 'trace');
   await page.getByTestId('trace-runs').getByRole('link', { name: 'MB-109' }).click();
-  await expect(page).toHaveURL(/\/runs\//);
+  await expect(page).toHaveURL(/\/runs\//, { timeout: 60_000 });
 
   await page.setViewportSize({ width: 390, height: 844 });
   await page.goto(`/runs/live/${fx.machineId}`);
-  await expect(page.getByTestId('machine-live')).toContainText('MB-109');
+  await expect(page.getByTestId('machine-live')).toContainText('MB-109', { timeout: 60_000 });
   await expect(page.getByTestId('auto-refresh')).toBeVisible();
   await shot(page, 'live-phone');
   await ctx.close();
