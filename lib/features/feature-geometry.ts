@@ -58,19 +58,6 @@ export function heightAlong(f: Feature, t: Vec3): number {
   }
 }
 
-/** A sphere enclosing the nominal feature (centre, radius). */
-export function boundingSphere(f: Feature): { c: Vec3; r: number } {
-  const n = featureAxis(f);
-  switch (f.type) {
-    case 'plane': return { c: f.origin, r: Math.hypot(f.size[0], f.size[1]) / 2 };
-    case 'sphere': return { c: f.center, r: f.diameter / 2 };
-    case 'bore': return { c: addScaled(f.center, n, -f.depth / 2), r: Math.hypot(f.diameter / 2, f.depth / 2) };
-    case 'boss': return { c: addScaled(f.center, n, -f.height / 2), r: Math.hypot(f.diameter / 2, f.height / 2) };
-    case 'slot':
-    case 'web': return { c: addScaled(f.center, n, -f.depth / 2), r: Math.hypot(f.length / 2, f.width / 2, f.depth / 2) };
-  }
-}
-
 /**
  * Whether part-frame point `p` (a stylus-ball centre) is in the free space of an interior
  * feature: inside the bore or slot shrunk by the ball radius `r` (plus `tol`), at any

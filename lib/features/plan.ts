@@ -9,7 +9,7 @@
  * orientation or any path point cannot be reached is left out with a warning naming it.
  */
 import { addScaled, cross, dot, GeometryError, normalize, perpendicular, type Vec3 } from '../geometry/vec3';
-import { prepareMachine, type PreparedMachine } from '../kinematics/machine';
+import { prepareMachine, rotaryValues, type PreparedMachine } from '../kinematics/machine';
 import { linearMapFor, solveOrientation, solutionsFor, type OrientationResult } from '../kinematics/inverse';
 import type { AxisValues } from '../kinematics/schema';
 import type { Plan, PlanWarning, TouchPoint } from '../program/plan-schema';
@@ -90,7 +90,6 @@ function travel(a: AxisValues, b: AxisValues): [number, number] {
   return [max, sum];
 }
 
-const rotariesOf = (pm: PreparedMachine, s: AxisValues): AxisValues => Object.fromEntries(pm.rotaries.map((x) => [x.name, s[x.name] ?? 0]));
 
 /** The remaining group nearest in rotary travel (its orientation solved from `current`). */
 function nextGroup(pm: PreparedMachine, groups: Group[], current: AxisValues): { index: number; orientation: Outcome<OrientationResult> } {
@@ -103,7 +102,7 @@ function nextGroup(pm: PreparedMachine, groups: Group[], current: AxisValues): {
       const first = g.items[0]?.starts[0];
       if (first) {
         const sol = solutionsFor(pm, first, orientation.value, current);
-        cost = travel(rotariesOf(pm, sol.solutions[sol.chosen]!), current);
+        cost = travel(rotaryValues(pm, sol.solutions[sol.chosen]!), current);
       }
     } catch (e) {
       orientation = failure(e);
@@ -138,7 +137,7 @@ function pickRotaries(pm: PreparedMachine, it: Planned, orientation: Orientation
   const pts = [...it.starts, ...it.contacts.map((c, i) => addScaled(it.starts[i]!, c.normal, -1)), ...pathPoints(path)];
   let firstProblem: { code: string; message: string } | null = null;
   for (const s of sols) {
-    const rot = rotariesOf(pm, s);
+    const rot = rotaryValues(pm, s);
     const problem = outsideTravel(pm, pts, rot);
     if (!problem) return { ok: true, value: rot };
     firstProblem ??= problem;

@@ -10,7 +10,7 @@
  */
 import { cross, GeometryError, normalize, norm, reject, type Vec3 } from '../geometry/vec3';
 import { fromColumns, type Mat3 } from '../geometry/rotation';
-import type { Machine, RotaryName } from './schema';
+import type { AxisValues, Machine, RotaryName } from './schema';
 
 export interface PreparedRotary {
   name: RotaryName;
@@ -67,6 +67,10 @@ export function prepareMachine(machine: Machine | PreparedMachine): PreparedMach
     setupOrigin: [...machine.setup.origin],
   };
 }
+
+/** Only the rotary values of a set of axis values (0 for a rotary not given), keyed by letter. */
+export const rotaryValues = (pm: PreparedMachine, axes: AxisValues): AxisValues =>
+  Object.fromEntries(pm.rotaries.map((r) => [r.name, axes[r.name] ?? 0]));
 
 /** The axis words of a machine in output order: X, Y, Z, then rotaries alphabetically (A, B, C). */
 export function axisWords(machine: Machine | PreparedMachine): string[] {

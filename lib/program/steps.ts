@@ -12,7 +12,7 @@
 import { distance, type Vec3 } from '../geometry/vec3';
 import { partToMachine } from '../kinematics/forward';
 import { linearMapFor } from '../kinematics/inverse';
-import { prepareMachine, type PreparedMachine } from '../kinematics/machine';
+import { prepareMachine, rotaryValues, type PreparedMachine } from '../kinematics/machine';
 import type { AxisValues, Machine } from '../kinematics/schema';
 import type { Feature, Part, Probe } from '../features/schema';
 import { featureAxis } from '../features/feature-geometry';
@@ -55,7 +55,6 @@ function runs(points: TouchPoint[]): TouchPoint[][] {
   return out;
 }
 
-const rotariesOf = (pm: PreparedMachine, axes: AxisValues): AxisValues => Object.fromEntries(pm.rotaries.map((r) => [r.name, axes[r.name] ?? 0]));
 const sameRotaries = (a: AxisValues | null, b: AxisValues): boolean => a !== null && Object.keys(b).every((k) => Math.abs((a[k] ?? 0) - (b[k] ?? 0)) < 1e-9);
 const xyz = (a: AxisValues): Vec3 => [a.X ?? 0, a.Y ?? 0, a.Z ?? 0];
 
@@ -78,7 +77,7 @@ export function buildProgram(plan: Plan, part: Part, probe: Probe, machine: Mach
     const first = run[0]!;
     const f = features.get(first.featureUuid);
     if (!f) throw new Error(`touch point ${first.uuid} names feature ${first.featureUuid}, which the part does not have`);
-    const r = rotariesOf(pm, first.axes);
+    const r = rotaryValues(pm, first.axes);
     const t = featureAxis(f);
     const key = t.join();
     const safeH = safeByAxis.get(key) ?? safeHeight(part, probe, t, clearances);
