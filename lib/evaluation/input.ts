@@ -6,6 +6,8 @@ import { z } from 'zod';
 import { partSchema, probeSchema } from '../features/schema';
 import { vec3Schema } from '../kinematics/schema';
 import { planSchema } from '../program/plan-schema';
+import { DEFAULT_WARNING_SHARE } from '../capability/decision';
+import { MIN_TUR } from '../capability/risk';
 
 export const measurementSchema = z.object({
   uuid: z.string().uuid(),
@@ -63,9 +65,9 @@ export const evaluateInputSchema = z.object({
     formMethod: formMethodSchema.default('minimum-zone'),
     /** Per-tolerance override of the form method. */
     methods: z.record(z.string(), formMethodSchema).default({}),
-    warningShare: finite.gt(0).max(1).default(0.8),
-    minTur: finite.positive().default(4),
-  }).default({ formMethod: 'minimum-zone', methods: {}, warningShare: 0.8, minTur: 4 }),
+    warningShare: finite.gt(0).max(1).default(DEFAULT_WARNING_SHARE),
+    minTur: finite.positive().default(MIN_TUR),
+  }).default({ formMethod: 'minimum-zone', methods: {}, warningShare: DEFAULT_WARNING_SHARE, minTur: MIN_TUR }),
   corrections: correctionSettingsSchema.optional(),
 });
 export type EvaluateInput = z.infer<typeof evaluateInputSchema>;
