@@ -4,7 +4,7 @@ import { LockIcon } from '@/components/ui/icons';
 /** Shown with HTTP 403 when a signed-in person opens a page their roles do not allow. */
 export default function Forbidden() {
   return (
-    <main className="flex min-h-dvh items-center justify-center px-4">
+    <main className="flex justify-center px-4 py-16">
       <section className="card max-w-md p-6" aria-labelledby="forbidden-title">
         <div className="mb-3 inline-flex rounded-full bg-danger-soft p-2.5 text-danger"><LockIcon /></div>
         <p className="text-caption font-semibold uppercase tracking-wide text-ink-faint">403 · Not allowed</p>

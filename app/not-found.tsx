@@ -2,7 +2,7 @@ import Link from 'next/link';
 
 export default function NotFound() {
   return (
-    <main className="flex min-h-dvh items-center justify-center px-4">
+    <main className="flex justify-center px-4 py-16">
       <section className="card max-w-md p-6">
         <p className="text-caption font-semibold uppercase tracking-wide text-ink-faint">404</p>
         <h1 className="mt-1 text-heading">Nothing at this address</h1>

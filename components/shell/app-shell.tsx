@@ -24,7 +24,7 @@ export function AppShell({ user, children }: { user: SessionUser; children: Reac
   const items = navFor(user).map(({ href, label, icon }) => ({ href, label, icon }));
   const roles = user.roles.map((r) => ROLE_LABELS[r]).join(', ');
   return (
-    <div className="min-h-dvh md:grid md:grid-cols-[var(--spacing-rail)_1fr]">
+    <div className="min-h-dvh md:grid md:grid-cols-[15rem_minmax(0,1fr)]">
       <aside className="hidden border-r border-line bg-surface md:flex md:flex-col">
         <div className="px-4 py-4"><Brand /></div>
         <p className="px-4 pb-3 text-caption uppercase tracking-wide text-ink-faint">{user.workspaceName}</p>

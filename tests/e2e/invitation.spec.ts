@@ -44,7 +44,7 @@ test('an invited person sets a password and arrives with the invited roles', asy
   // The link works once.
   const again = await (await browser.newContext()).newPage();
   await again.goto(link);
-  await expect(again.getByRole('alert')).toContainText('already been used');
+  await expect(again.getByText('This invitation link has already been used.')).toBeVisible();
 
   // The admin sees the new person and the audit trail.
   await adminPage.goto('/admin/people');
@@ -58,5 +58,5 @@ test('an invited person sets a password and arrives with the invited roles', asy
 
 test('a made-up invitation link says it is not valid', async ({ page }) => {
   await page.goto('/invitation/this-token-does-not-exist-anywhere-at-all');
-  await expect(page.getByRole('alert')).toContainText('not valid');
+  await expect(page.getByText('This invitation link is not valid.')).toBeVisible();
 });

@@ -7,7 +7,7 @@
  * several runs → the trace view links all the way → the machine's live page.
  */
 import { readFile, writeFile } from 'node:fs/promises';
-import { expect, test, type Page } from '@playwright/test';
+import { expect as baseExpect, test, type Page } from '@playwright/test';
 import { v4 as uuidv4 } from 'uuid';
 import { closeDb } from '@/db/client';
 import { evaluateRun } from '@/lib/evaluation/evaluate';
@@ -23,7 +23,9 @@ import { MULTI_ROLE_PERSON, PASSWORD, ROLE_PEOPLE, storageStateFor } from './sup
 import { signInByApi } from './support/sign-in';
 import { createFixtureProgram, tripLog, type Fixture } from './run-fixtures';
 
-test.describe.configure({ mode: 'serial', timeout: 180_000 });
+// Pages compile on first use under `next dev` and the machine is shared: be patient.
+const expect = baseExpect.configure({ timeout: 60_000 });
+test.describe.configure({ mode: 'serial', timeout: 240_000 });
 
 let fx: Fixture;
 const shot = (page: Page, name: string) => page.screenshot({ path: `test-results/e2e/run-loop-${name}.png`, fullPage: true });
@@ -62,7 +64,7 @@ test('submit, e-mail, diff, four-eyes refusal, approval', async ({ browser }) =>
   await page.goto('/reviews');
   const row = page.locator('tr', { has: page.locator(`a[href="/reviews/${rev2}"]`) });
   await row.getByRole('button', { name: 'Submit for review' }).click();
-  await expect(page.getByText(/Sent for review/)).toBeVisible({ timeout: 20_000 });
+  await expect(page.getByText(/Sent for review/)).toBeVisible();
 
   const mail = await waitForMail(ROLE_PEOPLE.reviewer.email, `Review requested: FH-1042 · ${fx.name} revision 2`);
   const link = firstLink(mail);
@@ -121,8 +123,8 @@ test('an upload of a simulated mis-made part shows the engine\'s verdict; a wron
   await page.getByLabel('Part serial or lot').fill('MB-0001');
   await page.getByTestId('results-file').setInputFiles(badPath);
   await page.getByRole('button', { name: 'Upload and evaluate' }).click();
-  await expect(page.getByTestId('upload-message')).toContainText('Nothing was stored', { timeout: 30_000 });
-  await expect(page.getByTestId('upload-problems')).toContainText('line 3:', { timeout: 30_000 });
+  await expect(page.getByTestId('upload-message')).toContainText('Nothing was stored');
+  await expect(page.getByTestId('upload-problems')).toContainText('line 3:');
   await shot(page, 'upload-refused');
 
   const goodPath = info.outputPath('trips.txt');
@@ -130,7 +132,7 @@ test('an upload of a simulated mis-made part shows the engine\'s verdict; a wron
   await page.getByTestId('results-file').setInputFiles(goodPath);
   await page.getByLabel('Part temperature (°C, optional)').fill('');
   await page.getByRole('button', { name: 'Upload and evaluate' }).click();
-  await page.waitForURL(/\/runs\/[0-9a-f-]{36}$/, { timeout: 60_000 });
+  await page.waitForURL(/\/runs\/[0-9a-f-]{36}$/);
   const table = page.getByTestId('results-table');
   await expect(table).toBeVisible();
   for (const r of expected.results) {
@@ -172,11 +174,11 @@ test('trends after several runs, the trace view and the live page', async ({ bro
   await expect(page.getByTestId('trace-runs')).toContainText('program line');
   await shot(page, 'trace');
   await page.getByTestId('trace-runs').getByRole('link', { name: 'MB-109' }).click();
-  await expect(page).toHaveURL(/\/runs\//, { timeout: 60_000 });
+  await expect(page).toHaveURL(/\/runs\//);
 
   await page.setViewportSize({ width: 390, height: 844 });
   await page.goto(`/runs/live/${fx.machineId}`);
-  await expect(page.getByTestId('machine-live')).toContainText('MB-109', { timeout: 60_000 });
+  await expect(page.getByTestId('machine-live')).toContainText('MB-109');
   await expect(page.getByTestId('auto-refresh')).toBeVisible();
   await shot(page, 'live-phone');
   await ctx.close();
