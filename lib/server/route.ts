@@ -9,6 +9,7 @@ import { AppError, type ErrorBody } from './app-error';
 import type { Ctx } from './context';
 import { fromZod, toAppError } from './errors';
 import { clientIp } from './request';
+import { ctxFromBearer } from './tokens/bearer-ctx';
 
 type Schema = z.ZodType;
 type Out<S> = S extends Schema ? z.output<S> : undefined;
@@ -54,6 +55,8 @@ async function readJson(req: NextRequest): Promise<unknown> {
 }
 
 async function loadCtx(req: NextRequest): Promise<Ctx> {
+  const fromToken = await ctxFromBearer(req); // API tokens (lib/server/tokens), before the cookie
+  if (fromToken) return fromToken;
   const session = await getServerSession(getAuthOptions());
   const { id, workspaceId } = session?.user ?? {};
   const user = id && workspaceId ? await loadSessionUser(id, workspaceId) : null;

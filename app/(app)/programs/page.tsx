@@ -1,6 +1,8 @@
 import type { Metadata } from 'next';
 import { PageHeader } from '@/components/ui/page-header';
 import { ProgramsList } from '@/components/programs/programs-list';
+import { ApiTokens } from '@/components/programs/api-tokens';
+import { listTokens } from '@/db/queries/tokens';
 import { listPrograms } from '@/db/queries/programs';
 import { listParts } from '@/db/queries/parts';
 import { listMachines } from '@/db/queries/machines';
@@ -14,11 +16,12 @@ export const metadata: Metadata = { title: 'Programs' };
 export default async function ProgramsPage() {
   const ctx = await requirePageCtx('programs.read');
   const canCreate = can(ctx.user, 'programs.generate');
-  const [rows, parts, machines, probes] = await Promise.all([
+  const [rows, parts, machines, probes, tokens] = await Promise.all([
     listPrograms(ctx),
     canCreate ? listParts(ctx) : Promise.resolve([]),
     canCreate ? listMachines(ctx) : Promise.resolve([]),
     canCreate ? listProbes(ctx) : Promise.resolve([]),
+    listTokens(ctx),
   ]);
   const choices = canCreate ? {
     parts: parts.map((p) => ({ id: p.id, label: `${p.number} rev ${p.revision} — ${p.name}` })),
@@ -30,6 +33,7 @@ export default async function ProgramsPage() {
     <>
       <PageHeader title="Programs" description="Probing programs for a part on a machine: generated, edited and kept as revisions." />
       <ProgramsList rows={rows} canCreate={canCreate} choices={choices} />
+      <div className="mt-8"><ApiTokens initial={tokens} /></div>
     </>
   );
 }
