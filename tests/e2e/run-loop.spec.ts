@@ -28,6 +28,7 @@ const expect = baseExpect.configure({ timeout: 60_000 });
 test.describe.configure({ mode: 'serial', timeout: 240_000 });
 
 let fx: Fixture;
+const tag = () => fx.name.slice(-6);
 const shot = (page: Page, name: string) => page.screenshot({ path: `test-results/e2e/run-loop-${name}.png`, fullPage: true });
 
 test.beforeAll(async () => { fx = await createFixtureProgram(); });
@@ -120,7 +121,7 @@ test('an upload of a simulated mis-made part shows the engine\'s verdict; a wron
   const badPath = info.outputPath('bad-trips.txt');
   await writeFile(badPath, bad.join('\n'));
   await page.goto(`/runs?revision=${fx.revisionIds[1]}`);
-  await page.getByLabel('Part serial or lot').fill('MB-0001');
+  await page.getByLabel('Part serial or lot').fill(`${tag()}-0001`);
   await page.getByTestId('results-file').setInputFiles(badPath);
   await page.getByRole('button', { name: 'Upload and evaluate' }).click();
   await expect(page.getByTestId('upload-message')).toContainText('Nothing was stored');
@@ -147,7 +148,7 @@ test('an upload of a simulated mis-made part shows the engine\'s verdict; a wron
   await expect(page.getByTestId('deviation-view')).toHaveAttribute('data-points', String(fx.plan.touchPoints.length));
   await page.waitForTimeout(1500);
   await shot(page, 'run-page');
-  await waitForMail(ROLE_PEOPLE.engineer.email, `${fx.name} revision 2, serial MB-0001`);
+  await waitForMail(ROLE_PEOPLE.engineer.email, `${fx.name} revision 2, serial ${tag()}-0001`);
   await ctx.close();
 });
 
@@ -155,7 +156,7 @@ test('trends after several runs, the trace view and the live page', async ({ bro
   const ctx = await browser.newContext({ storageState: storageStateFor('setup') });
   for (let i = 0; i < 10; i += 1) {
     const res = await ctx.request.post('/api/runs', {
-      multipart: { revisionId: fx.revisionIds[1], serial: `MB-${String(100 + i)}`, file: { name: 'trips.txt', mimeType: 'text/plain', buffer: Buffer.from(simulatedLog(100 + i, 0.002 * (i % 3))) } },
+      multipart: { revisionId: fx.revisionIds[1], serial: `${tag()}-${String(100 + i)}`, file: { name: 'trips.txt', mimeType: 'text/plain', buffer: Buffer.from(simulatedLog(100 + i, 0.002 * (i % 3))) } },
     });
     expect(res.status(), await res.text()).toBe(201);
   }
@@ -167,18 +168,18 @@ test('trends after several runs, the trace view and the live page', async ({ bro
   await shot(page, 'trends');
 
   await page.goto('/runs');
-  await page.getByRole('link', { name: 'MB-109' }).click();
+  await page.getByRole('link', { name: `${tag()}-109` }).click();
   await page.getByTestId('results-table').locator('tr').filter({ hasText: 'B2' }).getByRole('link', { name: 'position' }).click();
   await expect(page.getByRole('heading', { name: /Trace — FH-1042, balloon B2 position/ })).toBeVisible({ timeout: 60_000 });
   await expect(page.getByTestId('trace-revision').first()).toContainText('touch points on B2');
   await expect(page.getByTestId('trace-runs')).toContainText('program line');
   await shot(page, 'trace');
-  await page.getByTestId('trace-runs').getByRole('link', { name: 'MB-109' }).click();
+  await page.getByTestId('trace-runs').getByRole('link', { name: `${tag()}-109` }).click();
   await expect(page).toHaveURL(/\/runs\//);
 
   await page.setViewportSize({ width: 390, height: 844 });
   await page.goto(`/runs/live/${fx.machineId}`);
-  await expect(page.getByTestId('machine-live')).toContainText('MB-109');
+  await expect(page.getByTestId('machine-live')).toContainText(`${tag()}-109`);
   await expect(page.getByTestId('auto-refresh')).toBeVisible();
   await shot(page, 'live-phone');
   await ctx.close();
