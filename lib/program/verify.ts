@@ -56,7 +56,18 @@ export function verifyProgram(input: VerifyInput, post: ReadyPost): VerifyResult
   const rotaryNames = pm.rotaries.map((r) => r.name).sort();
   const reader = makeReader(post.bundle.definition, post.bundle.grammar, rotaryNames, (input.part.number ?? 'program').replace(/[^A-Za-z0-9-]/g, ''));
   const raw = input.program.split('\n');
-  const lines = raw.map((l) => reader.read(l));
+  // parsed lazily (the current line and the next), so a 100,000-line program keeps no parse tree
+  const cache = new Map<number, ReadLine>();
+  const line = (i: number): ReadLine => {
+    let v = cache.get(i);
+    if (!v) {
+      v = reader.read(raw[i] ?? '');
+      cache.set(i, v);
+      if (cache.size > 3) cache.delete(cache.keys().next().value as number);
+    }
+    return v;
+  };
+  const lines: Lines = { count: raw.length, at: line, recordAt: (i) => (raw[i]?.includes('TRIP') ? line(i) : null) };
   const clearances = partClearances(input.part, input.probe);
   const ctx: Ctx = {
     pm, part: input.part, probe: input.probe, r: probeRadius(input.probe), zTop: pm.machine.linear.Z[1],
@@ -70,26 +81,40 @@ export function verifyProgram(input: VerifyInput, post: ReadyPost): VerifyResult
   return { ok: !ctx.findings.some((f) => f.severity === 'error'), findings: ctx.findings };
 }
 
-function checkHeader(lines: ReadLine[], rawLines: string[], post: ReadyPost, add: (l: number, c: string, m: string, s?: Finding['severity']) => void) {
-  const firstBlock = lines.findIndex((l) => l.t === 'block');
-  const head = lines.slice(0, firstBlock < 0 ? lines.length : firstBlock).map((l) => (l.t === 'comment' ? l.text : '')).join(' ').toUpperCase().replace(/\s+/g, ' ');
+interface Lines { count: number; at: (i: number) => ReadLine; recordAt: (i: number) => ReadLine | null }
+
+function checkHeader(lines: Lines, rawLines: string[], post: ReadyPost, add: (l: number, c: string, m: string, s?: Finding['severity']) => void) {
+  const texts: string[] = [];
+  for (let i = 0; i < lines.count; i++) {
+    const l = lines.at(i);
+    if (l.t === 'block') break;
+    if (l.t === 'comment') texts.push(l.text);
+  }
+  const head = texts.join(' ').toUpperCase().replace(/\s+/g, ' ');
   const missing = CAUTION_PHRASES.filter((p) => !head.includes(p));
   if (missing.length > 0) add(1, 'CAUTION_MISSING', `the safety caution is missing or incomplete before the first move (not found: ${missing.join(', ')})`);
   for (const s of post.bundle.definition.safeStart) if (!rawLines.some((l) => l.trim().endsWith(s))) add(1, 'SAFE_START_MISSING', `the modal set-up line "${s}" is missing`, 'warning');
 }
 
 /** For each line, the uuid of the next record (what it works toward) and of the last one (what it leaves). */
-function contextUuids(lines: ReadLine[]): { next: (string | null)[]; prev: (string | null)[] } {
-  const next: (string | null)[] = new Array(lines.length).fill(null);
-  const prev: (string | null)[] = new Array(lines.length).fill(null);
+function contextUuids(lines: Lines): { next: (string | null)[]; prev: (string | null)[] } {
+  const records: (string | null)[] = new Array(lines.count).fill(null);
+  for (let i = 0; i < lines.count; i++) {
+    const l = lines.recordAt(i);
+    if (l?.t === 'record') records[i] = l.uuid;
+  }
+  const next: (string | null)[] = new Array(lines.count).fill(null);
+  const prev: (string | null)[] = new Array(lines.count).fill(null);
   let n: string | null = null;
-  for (let i = lines.length - 1; i >= 0; i--) {
-    const l = lines[i]!;
-    if (l.t === 'record') n = l.uuid;
+  for (let i = lines.count - 1; i >= 0; i--) {
+    n = records[i] ?? n;
     next[i] = n;
   }
   let p: string | null = null;
-  lines.forEach((l, i) => { prev[i] = p; if (l.t === 'record') p = l.uuid; });
+  for (let i = 0; i < lines.count; i++) {
+    prev[i] = p;
+    p = records[i] ?? p;
+  }
   return { next, prev };
 }
 
@@ -105,7 +130,7 @@ function classify(l: Extract<ReadLine, { t: 'block' }>, nextLine: ReadLine | und
   return null;
 }
 
-function replay(lines: ReadLine[], ctx: Ctx, post: ReadyPost, add: (l: number, c: string, m: string, s?: Finding['severity']) => void) {
+function replay(lines: Lines, ctx: Ctx, post: ReadyPost, add: (l: number, c: string, m: string, s?: Finding['severity']) => void) {
   const ctxUuid = contextUuids(lines);
   const measured = new Set<string>();
   const pos: AxisValues = {};
@@ -116,9 +141,10 @@ function replay(lines: ReadLine[], ctx: Ctx, post: ReadyPost, add: (l: number, c
   const needsCheck = post.bundle.grammar.touchCheck !== null;
   let frame: Frame | null = null;
   let lastPose: Pose | null = null;
-  lines.forEach((l, i) => {
+  for (let i = 0; i < lines.count; i++) {
+    const l = lines.at(i);
     const ln = i + 1;
-    if (l.t === 'unknown') { add(ln, 'UNKNOWN_WORD', `"${l.text.slice(0, 60)}" is not a statement the ${post.bundle.definition.id} post writes`); return; }
+    if (l.t === 'unknown') { add(ln, 'UNKNOWN_WORD', `"${l.text.slice(0, 60)}" is not a statement the ${post.bundle.definition.id} post writes`); continue; }
     if (l.t === 'record') {
       const tp = ctx.points.get(l.uuid);
       if (!tp) add(ln, 'UNKNOWN_POINT', `record for ${l.uuid}, which is not a touch point of the plan`);
@@ -126,18 +152,18 @@ function replay(lines: ReadLine[], ctx: Ctx, post: ReadyPost, add: (l: number, c
       if (phase !== 'afterSlow') add(ln, 'RECORD_MISSING', `record of ${l.uuid} without a measuring touch just before it`);
       measured.add(l.uuid);
       phase = 'afterRecord';
-      return;
+      continue;
     }
-    if (l.t !== 'block') return;
+    if (l.t !== 'block') continue;
     if (l.unknown.length > 0) add(ln, 'UNKNOWN_WORD', `unknown word(s) ${l.unknown.join(' ')} for the ${post.bundle.definition.id} post`);
     if (l.codes.includes('G91')) incremental = true;
     if (l.codes.includes('G90')) incremental = false;
-    const kind = classify(l, lines[i + 1], post) ?? modal;
+    const kind: Kind | null = classify(l, lines.at(i + 1), post) ?? modal;
     if (kind && kind !== 'touch' && kind !== 'protected') modal = kind;
     let nAxis = 0;
     let linearWord = false;
     for (const w in l.words) if (w !== 'F') { nAxis++; if (w === 'X' || w === 'Y' || w === 'Z') linearWord = true; }
-    if (nAxis === 0 || kind === null) return;
+    if (nAxis === 0 || kind === null) continue;
     const hasRot = rotaryWords(l.words, ctx);
     const fromZ = pos.Z;
     const from: AxisValues | null = hasRot || !lastPose ? { ...pos } : null;
@@ -148,10 +174,10 @@ function replay(lines: ReadLine[], ctx: Ctx, post: ReadyPost, add: (l: number, c
     if (rotaryMoved && ((fromZ ?? -Infinity) < ctx.zTop - Z_TOP_TOL_MM || linearWord)) {
       add(ln, 'ROTARY_BELOW_CLEARANCE', `rotary move with Z at ${(fromZ ?? NaN).toFixed(3)} or together with a linear move; rotaries may move only alone with Z at the top of its travel (${ctx.zTop})`);
     }
-    if ((kind === 'protected' || kind === 'touch') && !checkFollows(lines[i + 1], kind, needsCheck, post)) {
+    if ((kind === 'protected' || kind === 'touch') && !checkFollows(lines.at(i + 1), kind, needsCheck, post)) {
       add(ln, 'CHECK_MISSING', kind === 'protected' ? 'protected move without the unexpected-trigger check after it' : 'touch without the no-trigger check after it');
     }
-    if (!known) return;
+    if (!known) continue;
     if (!frame || hasRot) frame = frameAt(ctx, pos);
     const a = lastPose && !rotaryMoved ? lastPose : poseIn(frameAt(ctx, from ?? pos), from ?? pos);
     const b = poseIn(frame, pos);
@@ -166,16 +192,16 @@ function replay(lines: ReadLine[], ctx: Ctx, post: ReadyPost, add: (l: number, c
         Object.assign(pos, linearAxesFor(ctx.pm, tp.target, pos));
         lastPose = null;
       }
-      return;
+      continue;
     }
     if (phase !== 'free') {
       phase = afterTouch(ctx, phase, lastTouch, kind, incremental, b.tip, ln, add);
-      if (phase === 'free' || phase === 'afterBackoff') return;
+      if (phase === 'free' || phase === 'afterBackoff') continue;
     }
     checkPath(ctx, kind, fromZ, pos.Z, a, b, frame.safe, [tp, left], ln, add);
-  });
+  }
   for (const tp of ctx.points.values()) {
-    if (!measured.has(tp.uuid.toLowerCase())) add(lines.length, 'POINT_NOT_MEASURED', `touch point ${tp.seq} (${tp.uuid}) of the plan is never measured`);
+    if (!measured.has(tp.uuid.toLowerCase())) add(lines.count, 'POINT_NOT_MEASURED', `touch point ${tp.seq} (${tp.uuid}) of the plan is never measured`);
   }
 }
 
