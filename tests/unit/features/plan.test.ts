@@ -42,6 +42,13 @@ describe('touch points follow the contract', () => {
     const before = new Set(of(p.touchPoints, sphere.uuid).map((t) => t.uuid));
     expect(of(moved.touchPoints, sphere.uuid).some((t) => before.has(t.uuid))).toBe(false);
   });
+  it('uuids agree with an independent RFC 9562 v5 implementation', () => {
+    // Source: Python 3 standard library uuid.uuid5 (a general-purpose reference implementation),
+    // run on the documented name: v5(ns, "<feature uuid>|" + v5(ns, canonical geometry) + "|<index>").
+    const face = of(plan(demoBracket).touchPoints, demoBracket.features[0]!.uuid);
+    expect(face[0]!.uuid).toBe('231c29a4-11cc-56cd-8586-8797b8d2f998');
+    expect(face[8]!.uuid).toBe('c7dd59d6-852c-5e9c-8de1-8548320e6fe0');
+  });
   it('features are grouped by tool axis: each axis appears in one run', () => {
     const runs: string[] = [];
     for (const tp of p.touchPoints) {
