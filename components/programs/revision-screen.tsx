@@ -15,11 +15,12 @@ import { ProgramEditor } from '@/components/editor/lazy-editors';
 import { PartView3D } from '@/components/three/lazy-views';
 import { api, ApiError, errorMessage } from './client/api';
 
-type Props = { revision: RevisionDetail; features: Feature[]; canEdit: boolean };
+export type AdviceRow = { key: string; feature: string; characteristic: string; points: number; tur: number | null; where: 'on-machine' | 'cmm' | null; message: string };
+type Props = { revision: RevisionDetail; features: Feature[]; canEdit: boolean; advice: AdviceRow[] };
 
 const severityMark: Record<Finding['severity'], string> = { error: '✖ error', warning: '▲ warning', info: 'ℹ info' };
 
-export function RevisionScreen({ revision, features, canEdit }: Props) {
+export function RevisionScreen({ revision, features, canEdit, advice }: Props) {
   const router = useRouter();
   const [editing, setEditing] = useState(false);
   const [text, setText] = useState(revision.text);
@@ -83,6 +84,18 @@ export function RevisionScreen({ revision, features, canEdit }: Props) {
             ))}
           </ul>
         )}
+      </section>
+      <section aria-label="Capability advice" className="card overflow-x-auto">
+        <h2 className="px-3 pt-3 text-title">Capability advice per tolerance</h2>
+        <p className="px-3 text-caption text-ink-muted">Test-uncertainty ratio (span / 2U) for this probe and these points; on the machine at 4:1 or better, otherwise the CMM. Unentered conditions use the workspace defaults.</p>
+        <table className="data-table mt-2">
+          <thead><tr><th>Feature</th><th>Characteristic</th><th>Points</th><th>TUR</th><th>Advice</th></tr></thead>
+          <tbody>{advice.map((a) => (
+            <tr key={a.key}><td className="font-mono">{a.feature}</td><td>{a.characteristic}</td><td className="tabular-nums">{a.points}</td>
+              <td className="tabular-nums">{a.tur === null ? '—' : `${a.tur.toFixed(1)}:1`}</td>
+              <td>{a.where === 'on-machine' ? '● on the machine' : a.where === 'cmm' ? '▲ send to the CMM' : ''} <span className="text-caption text-ink-muted">{a.message}</span></td></tr>
+          ))}</tbody>
+        </table>
       </section>
       <section aria-label="Touch points in 3D">
         <h2 className="mb-2 text-title">Touch points ({revision.plan.touchPoints.length})</h2>
