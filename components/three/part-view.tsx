@@ -19,10 +19,14 @@ export type PartViewProps = { features: readonly Feature[]; touchPoints?: readon
 const pageSize = 25;
 const fmt = (v: readonly number[]) => v.map((n) => n.toFixed(3)).join(', ');
 
+/** Above this many points only every n-th is drawn (the table lists them all), to keep the view responsive. */
+const maxDrawn = 1500;
+
 function TouchPointMarks({ points, colorOf, size }: { points: readonly TouchPoint[]; colorOf: Map<string, string>; size: number }) {
+  const step = Math.max(1, Math.ceil(points.length / maxDrawn));
   return (
     <group>
-      {points.map((t) => {
+      {points.filter((_, i) => i % step === 0).map((t) => {
         const color = colorOf.get(t.featureUuid) ?? '#999999';
         return (
           <group key={t.uuid}>
@@ -100,7 +104,7 @@ export default function PartView({ features, touchPoints = [], height = 420 }: P
               </li>
             ))}
           </ul>
-          <p className="mt-1 text-xs text-slate-600">Arrows run from each touch point&apos;s start to its nominal contact: the approach direction.</p>
+          <p className="mt-1 text-xs text-slate-600">Arrows run from each touch point&apos;s start to its nominal contact: the approach direction.{touchPoints.length > maxDrawn ? ` Every ${Math.ceil(touchPoints.length / maxDrawn)}th of ${touchPoints.length} points is drawn.` : ''}</p>
         </div>
         <TouchPointTable points={touchPoints} labelOf={labelOf} colorOf={colorOf} />
       </figcaption>

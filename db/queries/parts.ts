@@ -214,6 +214,9 @@ export async function setDatum(ctx: Ctx, partId: string, letter: string, feature
 
 export async function removeDatum(ctx: Ctx, partId: string, letter: string): Promise<void> {
   await partRowOrThrow(getDb(), ctx, partId);
+  const used = await getDb().select({ datums: tolerances.datums }).from(tolerances).where(and(eq(tolerances.partId, partId), eq(tolerances.workspaceId, ctx.user.workspaceId)));
+  const count = used.filter((t) => t.datums.includes(letter)).length;
+  if (count > 0) throw new AppError('conflict', `Datum ${letter} is referenced by ${count} tolerance(s); change those first.`, { path: 'letter' });
   const res = await getDb().delete(datums).where(and(eq(datums.partId, partId), eq(datums.letter, letter), eq(datums.workspaceId, ctx.user.workspaceId)));
   if (res[0].affectedRows === 0) throw new AppError('not-found', `Datum ${letter} is not assigned on this part.`);
 }

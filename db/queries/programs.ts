@@ -67,7 +67,10 @@ export async function listPrograms(ctx: Ctx): Promise<ProgramRow[]> {
   const db = getDb();
   const rows = await programRows(db, ctx);
   const revs = await revisionRows(db, ctx, rows.map((r) => r.id));
-  return rows.map((p) => toProgramRow(p, revs.find((r) => r.programId === p.id) && toRevisionRow(revs.find((r) => r.programId === p.id)!)));
+  return rows.map((p) => {
+    const latest = revs.find((r) => r.programId === p.id);
+    return toProgramRow(p, latest ? toRevisionRow(latest) : undefined);
+  });
 }
 
 export async function getProgram(ctx: Ctx, programId: string, db: DbOrTx = getDb()): Promise<ProgramDetail> {
