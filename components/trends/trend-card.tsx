@@ -20,14 +20,14 @@ export function TrendCard({ trend, partId, toleranceId }: { trend: Trend; partId
         <div><dt className="text-ink-muted">std. deviation</dt><dd className="font-mono">{f(s.sd, 5)}</dd></div>
         <div><dt className="text-ink-muted">Cp</dt><dd className="font-mono" data-testid="cp">{s.cp === null ? '—' : s.cp.toFixed(2)}</dd></div>
         <div><dt className="text-ink-muted">Cpk</dt><dd className="font-mono" data-testid="cpk">{s.cpk === null ? '—' : s.cpk.toFixed(2)}</dd></div>
-        <div><dt className="text-ink-muted">Cpk 95 %</dt><dd className="font-mono">{s.cpkInterval ? `${s.cpkInterval[0].toFixed(2)}–${s.cpkInterval[1].toFixed(2)}` : '—'}</dd></div>
+        <div><dt className="text-ink-muted">Cpk 95 %</dt><dd className="font-mono">{s.cpkInterval ? `${s.cpkInterval[0].toFixed(2)} to ${s.cpkInterval[1].toFixed(2)}` : '—'}</dd></div>
       </dl>
       <p className="text-caption text-ink-muted">
         Cp and Cpk are given from {MIN_VALUES_FOR_CAPABILITY} real runs on (common practice: fewer say little) and are preliminary below {FULL_STUDY_VALUES}.
         {s.reason === 'too-few-values' ? ` ${MIN_VALUES_FOR_CAPABILITY - s.n} more run${MIN_VALUES_FOR_CAPABILITY - s.n === 1 ? '' : 's'} needed.` : ''}
         {s.reason === 'no-spread' ? ' All values are equal: no spread to judge.' : ''}
         {s.cpk !== null && s.preliminary ? ' Preliminary.' : ''}
-        {trend.limits.lower === null ? ' One-sided tolerance: Cp does not apply.' : ''}
+        {trend.limits.lower === null && trend.limits.upper !== null ? ' One-sided tolerance: Cp does not apply.' : ''}
         {trend.simulatedLeftOut > 0 ? ` ${trend.simulatedLeftOut} simulated run${trend.simulatedLeftOut === 1 ? '' : 's'} left out.` : ''}
       </p>
     </section>

@@ -165,6 +165,7 @@ test('trends after several runs, the trace view and the live page', async ({ bro
   const card = page.getByTestId('trend-card').filter({ hasText: 'B2 · diameter' });
   await expect(card.getByTestId('run-chart')).toBeVisible({ timeout: 60_000 });
   await expect(card.getByTestId('cpk')).not.toHaveText('—');
+  await expect(card.locator('.recharts-line-dots circle').first()).toBeVisible();
   await shot(page, 'trends');
 
   await page.goto('/runs');
