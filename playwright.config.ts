@@ -28,8 +28,9 @@ export default defineConfig({
   },
   projects: [
     { name: 'setup', testMatch: /support\/.*\.setup\.ts$/ },
-    { name: 'e2e', testMatch: /\.spec\.ts$/, testIgnore: /outage\.spec\.ts$/, dependencies: ['setup'] },
-    // Stops and restarts the database: runs alone, after everything else.
-    { name: 'outage', testMatch: /outage\.spec\.ts$/, dependencies: ['e2e'] },
+    // `outage` stops and restarts the database: a teardown, so it runs alone after every
+    // e2e test, whatever their results.
+    { name: 'e2e', testMatch: /\.spec\.ts$/, testIgnore: /outage\.spec\.ts$/, dependencies: ['setup'], teardown: 'outage' },
+    { name: 'outage', testMatch: /outage\.spec\.ts$/ },
   ],
 });
