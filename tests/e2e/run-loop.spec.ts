@@ -34,12 +34,12 @@ const shot = (page: Page, name: string) => page.screenshot({ path: `test-results
 test.beforeAll(async () => { fx = await createFixtureProgram(); });
 test.afterAll(async () => { await closeDb(); });
 
-function simulatedLog(seed: number, b2Offset: number): string {
+function simulatedLog(seed: number, b2Offset: number, partShift: [number, number, number] = [0, 0, 0]): string {
   const b2 = fx.part.features.find((f) => f.label === 'B2');
   if (!b2) throw new Error('fixture part lacks B2');
   const sim = simulateRun(simulateInputSchema.parse({
     part: fx.part, probe: fx.probe, plan: fx.plan, machine: fx.machine, seed,
-    errors: { features: { [b2.uuid]: { offset: [b2Offset, 0, 0], sizeError: 0.01 } }, formNoise: 0.0005 },
+    errors: { features: { [b2.uuid]: { offset: [b2Offset, 0, 0], sizeError: 0.01 } }, formNoise: 0.0005, workOffsetError: partShift },
   }));
   return tripLog(fx.plan, fx.machine, sim.measurements.map((m) => ({ uuid: m.uuid, point: 'point' in m ? m.point : undefined })));
 }
@@ -112,7 +112,8 @@ test('setup technician downloads the package and every checksum holds', async ({
 test('an upload of a simulated mis-made part shows the engine\'s verdict; a wrong UUID is refused whole', async ({ browser }, info) => {
   const ctx = await browser.newContext({ storageState: storageStateFor('setup') });
   const page = await ctx.newPage();
-  const log = simulatedLog(7, 0.05);
+  // B2 made 0.05 mm off in X and 0.01 mm large; the whole part clamped 0.03 mm off in Y.
+  const log = simulatedLog(7, 0.05, [0, 0.03, 0]);
   const expected = engineVerdict(log);
 
   // A wrong UUID on line 3: nothing stored, the line named.
@@ -143,8 +144,14 @@ test('an upload of a simulated mis-made part shows the engine\'s verdict; a wron
     if (r.bonus !== undefined) await expect(cells.getByTestId('result-bonus')).toHaveText(r.bonus.toFixed(4));
   }
   expect(expected.results.some((r) => r.status === 'nonconforming')).toBe(true);
-  const lines = (expected.corrections?.proposals ?? []).map((p) => p.line).filter((l): l is string => Boolean(l));
-  for (const l of lines) await expect(page.getByTestId('corrections')).toContainText(l);
+  const proposals = expected.corrections?.proposals ?? [];
+  const shown = page.getByTestId('corrections').locator(':scope > li');
+  await expect(shown).toHaveCount(proposals.length);
+  for (const [i, p] of proposals.entries()) {
+    await expect(shown.nth(i)).toHaveAttribute('data-state', p.state);
+    if (p.line) await expect(shown.nth(i).getByTestId('correction-code')).toHaveText(p.line);
+  }
+  expect(proposals.some((p) => p.kind === 'work-offset' && p.state === 'apply' && p.line)).toBe(true);
   await expect(page.getByTestId('deviation-view')).toHaveAttribute('data-points', String(fx.plan.touchPoints.length));
   await page.waitForTimeout(1500);
   await shot(page, 'run-page');
