@@ -16,6 +16,7 @@ let baseURL = '';
 
 const errorOf = async (res: Awaited<ReturnType<APIRequestContext['get']>>) => ((await res.json()) as { error: { code: string; path?: string; message: string } }).error;
 
+// eslint-disable-next-line no-empty-pattern -- Playwright needs a destructured first argument even with no fixtures
 test.beforeAll(async ({}, info) => {
   baseURL = info.project.use.baseURL ?? 'http://127.0.0.1:3100';
   const programmer = await asRole('programmer', baseURL);
