@@ -17,7 +17,7 @@ export function ProgramScreen({ program, canGenerate, autoGenerate, machines, pr
   const [target, setTarget] = useState(machines.find((m) => m.id !== program.machineId)?.id ?? '');
   const [busy, setBusy] = useState(false);
   const columns: ColumnDef<RevisionRow, unknown>[] = [
-    { accessorKey: 'number', header: 'Revision', cell: (c) => <Link className="font-medium text-brand hover:underline" href={`/programs/${program.id}/revisions/${c.row.original.id}`}>Revision {c.row.original.number}</Link> },
+    { accessorKey: 'number', header: 'Revision', cell: (c) => <Link className="font-medium text-brand hover:underline" href={`/revisions/${c.row.original.id}`}>Revision {c.row.original.number}</Link> },
     { accessorKey: 'author', header: 'Author' },
     { accessorKey: 'message', header: 'Message' },
     { accessorKey: 'status', header: 'Status' },

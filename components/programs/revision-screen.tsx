@@ -38,7 +38,7 @@ export function RevisionScreen({ revision, features, canEdit, advice }: Props) {
       const out = await api<{ id: string; number: number; findings: Finding[] }>(`/api/programs/${revision.programId}/revisions`, { body: { baseRevision: revision.number, text, message } });
       setFindings(out.findings);
       toast.success(`Saved as revision ${out.number} (${out.findings.length} finding${out.findings.length === 1 ? '' : 's'})`);
-      router.push(`/programs/${revision.programId}/revisions/${out.id}`);
+      router.push(`/revisions/${out.id}`);
     } catch (e) {
       if (e instanceof ApiError && e.status === 409) setConflict(e.message);
       toast.error(errorMessage(e));

@@ -18,6 +18,7 @@ const errorOf = async (res: Awaited<ReturnType<APIRequestContext['get']>>) => ((
 
 // eslint-disable-next-line no-empty-pattern -- Playwright needs a destructured first argument even with no fixtures
 test.beforeAll(async ({}, info) => {
+  test.setTimeout(180_000);
   baseURL = info.project.use.baseURL ?? 'http://127.0.0.1:3100';
   const programmer = await asRole('programmer', baseURL);
   const part = await programmer.post('/api/parts', { data: { number: `API-${Date.now()}`, revision: 'A', name: 'API check plate' } });
@@ -111,9 +112,9 @@ test('setup cannot open drafts; another workspace sees none of it', async ({ bro
   const list = ((await (await setup.get(`/api/programs/${f.programId}`)).json()) as { program: { revisions: unknown[] } }).program;
   expect(list.revisions).toHaveLength(0);
   const page = await browser.newPage({ storageState: storageStateFor('setup') });
-  // The refusal happens inside the section's streamed loading boundary, so the status is
-  // already 200 when it is known; the 403 page is what the person gets.
-  await page.goto(`/programs/${f.programId}/revisions/${f.revisionId}`);
+  // The revision route checks in its layout, before any loading boundary: a real 403.
+  const res = await page.goto(`${baseURL}/revisions/${f.revisionId}`);
+  expect(res?.status()).toBe(403);
   await expect(page.getByRole('heading', { name: 'Your roles do not include this page' })).toBeVisible();
   await page.close();
   const other = await asRole('other-admin', baseURL);

@@ -1,6 +1,6 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
-import { forbidden, notFound } from 'next/navigation';
+import { notFound } from 'next/navigation';
 import { PageHeader } from '@/components/ui/page-header';
 import { RevisionScreen } from '@/components/programs/revision-screen';
 import { getRevision } from '@/db/queries/revisions';
@@ -17,16 +17,15 @@ export const metadata: Metadata = { title: 'Revision' };
 
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
-export default async function RevisionPage({ params }: { params: Promise<{ programId: string; revisionId: string }> }) {
+export default async function RevisionPage({ params }: { params: Promise<{ revisionId: string }> }) {
   const ctx = await requirePageCtx('programs.read');
-  const { programId, revisionId } = await params;
-  if (!UUID.test(programId) || !UUID.test(revisionId)) notFound();
+  const { revisionId } = await params;
+  if (!UUID.test(revisionId)) notFound();
   const revision = await getRevision(ctx, revisionId).catch((e: unknown) => {
     if (isAppError(e) && e.code === 'not-found') notFound();
-    if (isAppError(e) && e.code === 'forbidden') forbidden();
     throw e;
   });
-  if (revision.programId !== programId) notFound();
+  const programId = revision.programId;
   const program = await getProgram(ctx, programId);
   const [part, probe] = await Promise.all([enginePart(getDb(), ctx, program.partId), getProbe(ctx, program.probeId)]);
   const labelOf = new Map(part.features.map((f) => [f.uuid, f.label]));

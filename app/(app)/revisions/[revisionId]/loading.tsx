@@ -1,0 +1,5 @@
+import { SectionLoading } from '@/components/shell/section-loading';
+
+export default function Loading() {
+  return <SectionLoading label="programs" />;
+}
