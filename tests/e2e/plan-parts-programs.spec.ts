@@ -8,7 +8,7 @@ import { expect, test, type Page } from '@playwright/test';
 import { storageStateFor } from './support/roles';
 
 test.use({ storageState: storageStateFor('programmer') });
-test.setTimeout(180_000);
+test.setTimeout(300_000);
 const slow = { timeout: 60_000 };
 
 async function addFeature(page: Page, values: Record<string, string>) {
@@ -74,7 +74,7 @@ test('programmer builds a part, generates, edits and saves revision 2', async ({
   await page.keyboard.press('Control+End');
   await page.keyboard.press('Enter');
   await page.keyboard.insertText('Q77 (inserted by hand)');
-  await page.getByLabel('What changed').fill('added a stray word to check the verifier');
+  await page.getByLabel('What you changed').fill('added a stray word to check the verifier');
   await page.getByRole('button', { name: 'Save as new revision' }).click();
   await expect(page.getByRole('heading', { name: /revision 2/ })).toBeVisible(slow);
   await expect(page.getByRole('region', { name: 'Verifier findings' }).getByRole('listitem').first()).toBeVisible(slow);
