@@ -60,6 +60,7 @@ export default function CodeEditor({ value, readOnly = true, findings = [], onCh
         onMount={(editor) => { editorRef.current = editor; applyMarkers(editor); }}
         options={{
           readOnly,
+          renderValidationDecorations: 'on', // Monaco hides markers in read-only editors by default ('editable')
           domReadOnly: readOnly,
           minimap: { enabled: false },
           fontSize: 13,
