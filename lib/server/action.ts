@@ -22,6 +22,17 @@ function fieldErrorsOf(error: z.ZodError): Record<string, string> {
   return out;
 }
 
+/** A zod refusal as action data: every field's message beside it. */
+function invalidResult(error: z.ZodError): ActionResult<never> {
+  return { ok: false, code: 'invalid', message: 'Some fields need attention.', fieldErrors: fieldErrorsOf(error) };
+}
+
+/** Any thrown error as action data (typed AppErrors keep their code, message and field). */
+function failureResult(error: unknown): ActionResult<never> {
+  const e = toAppError(error, 'action');
+  return { ok: false, code: e.code, message: e.message, ...(e.options.path ? { fieldErrors: { [e.options.path]: e.message } } : {}) };
+}
+
 /**
  * The one wrapper for server actions: zod parse → session → roles re-read from the
  * database → permission → run. Expected failures come back as data
@@ -33,9 +44,7 @@ export function authedAction<S extends z.ZodType, T>(
 ): (raw: z.input<S>) => Promise<ActionResult<T>> {
   return async (raw) => {
     const parsed = spec.input.safeParse(raw);
-    if (!parsed.success) {
-      return { ok: false, code: 'invalid', message: 'Some fields need attention.', fieldErrors: fieldErrorsOf(parsed.error) };
-    }
+    if (!parsed.success) return invalidResult(parsed.error);
     try {
       const user = await getSessionUser();
       if (!user) throw new AppError('unauthenticated', 'Your session has ended. Sign in again.');
@@ -43,8 +52,7 @@ export function authedAction<S extends z.ZodType, T>(
       const ctx: Ctx = { user, ip: clientIp(await headers()) };
       return { ok: true, data: await run(ctx, parsed.data) };
     } catch (error) {
-      const e = toAppError(error, 'action');
-      return { ok: false, code: e.code, message: e.message, ...(e.options.path ? { fieldErrors: { [e.options.path]: e.message } } : {}) };
+      return failureResult(error);
     }
   };
 }
@@ -56,14 +64,11 @@ export function publicAction<S extends z.ZodType, T>(
 ): (raw: z.input<S>) => Promise<ActionResult<T>> {
   return async (raw) => {
     const parsed = spec.input.safeParse(raw);
-    if (!parsed.success) {
-      return { ok: false, code: 'invalid', message: 'Some fields need attention.', fieldErrors: fieldErrorsOf(parsed.error) };
-    }
+    if (!parsed.success) return invalidResult(parsed.error);
     try {
       return { ok: true, data: await run(parsed.data, clientIp(await headers())) };
     } catch (error) {
-      const e = toAppError(error, 'action');
-      return { ok: false, code: e.code, message: e.message, ...(e.options.path ? { fieldErrors: { [e.options.path]: e.message } } : {}) };
+      return failureResult(error);
     }
   };
 }
