@@ -47,6 +47,7 @@ test.describe('second workspace admin', () => {
   const kit = STONEBRIDGE.people.find((p) => p.key === 'programmer') ?? { name: '', email: '' };
 
   test('role changes apply on the person’s next request; deactivation shuts them out', async ({ page, browser }) => {
+    test.slow(); // two browser contexts and a dozen round trips: 30 s was tight on a loaded 2-core machine
     const theirs = await browser.newContext();
     expect((await signInByApi(theirs.request, kit.email, PASSWORD)).status()).toBe(200);
     const theirPage = await theirs.newPage();
