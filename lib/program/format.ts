@@ -6,7 +6,13 @@ import type { PostDefinition } from './postprocessor-schema';
 
 export function fixed(v: number, decimals: number): string {
   const s = v.toFixed(decimals);
-  return s.charCodeAt(0) === 45 && Number(s) === 0 ? s.slice(1) : s;
+  if (s.charCodeAt(0) !== 45) return s;
+  // "-0.000" → "0.000": negative only if some digit is not zero
+  for (let i = 1; i < s.length; i++) {
+    const c = s.charCodeAt(i);
+    if (c !== 48 && c !== 46) return s;
+  }
+  return s.slice(1);
 }
 
 const ASCII: Record<string, string> = { '—': '-', '–': '-', '⌀': 'D', '°': ' DEG', '’': "'", '‘': "'", '“': '"', '”': '"', '×': 'X', 'µ': 'U' };

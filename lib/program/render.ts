@@ -1,10 +1,12 @@
 /**
  * Renders a view model through a post's handlebars templates on an isolated
  * `Handlebars.create()` instance (no global helpers or partials). Templates only loop
- * and interpolate; escaping is off because G-code is not HTML.
+ * and interpolate; escaping is off because G-code is not HTML. Templates that stay in the
+ * logic-free subset are rendered directly (render-direct.ts), with the same output.
  */
 import Handlebars from 'handlebars';
 import { numberLines } from './format';
+import { compileDirect } from './render-direct';
 import type { PostDefinition } from './postprocessor-schema';
 import type { ProgramView } from './view-model';
 
@@ -41,5 +43,7 @@ export function createRenderer(bundle: PostBundle): Renderer {
   const hb = Handlebars.create();
   for (const [name, text] of Object.entries(bundle.templates.partials)) hb.registerPartial(name, text);
   const main = hb.compile<ProgramView>(bundle.templates.main, { noEscape: true, strict: false, preventIndent: true });
-  return (view) => numberLines(main(view), bundle.definition);
+  // the same templates rendered by plain concatenation when they stay in the logic-free subset
+  const direct = compileDirect(bundle.templates.main, bundle.templates.partials);
+  return (view) => numberLines((direct && direct(view)) ?? main(view), bundle.definition);
 }

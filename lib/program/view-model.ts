@@ -10,16 +10,20 @@ import { commentLines, fixed } from './format';
 import type { PostDefinition } from './postprocessor-schema';
 import type { NeutralProgram, Step } from './steps';
 
+/** Every field is present (empty when a kind has no use for it), so all blocks share one shape. */
 export interface Block {
   kind: Step['kind'];
-  words?: string;
-  feed?: string;
-  x?: string;
-  y?: string;
-  z?: string;
-  record?: string;
-  comment?: string;
+  words: string;
+  feed: string;
+  x: string;
+  y: string;
+  z: string;
+  record: string;
+  comment: string;
 }
+
+const block = (kind: Step['kind'], words: string, feed = '', x = '', y = '', z = '', record = '', comment = ''): Block =>
+  ({ kind, words, feed, x, y, z, record, comment });
 
 export interface ProgramView {
   programStart: string[];
@@ -77,26 +81,42 @@ export function buildView(def: PostDefinition, prog: NeutralProgram, part: Part,
   const words = ['X', 'Y', 'Z', ...prog.rotaryNames];
   const values = words.map((w) => fill(def.trip.value, { word: w, var: def.trip.variables[w] ?? '#0' })).join(def.trip.separator);
   let lastFeed = NaN;
+  const feedText = new Map<number, string>();
   const feed = (f: number): string => {
     if (!def.repeatFeed && f === lastFeed) return '';
     lastFeed = f;
-    return ` F${fixed(f, def.decimals.feed)}`;
+    let t = feedText.get(f);
+    if (t === undefined) feedText.set(f, (t = ` F${fixed(f, def.decimals.feed)}`));
+    return t;
+  };
+  // the record statement split at its uuid, with the trip values filled in once
+  const recordParts = def.trip.record.split('{uuid}').map((p) => fill(p, { values }));
+  // steps share their target objects (a touch's end for both passes, a start for its
+  // retract): the last two targets are formatted once
+  type Words = { to: AxisValues | null; words: string; x: string; y: string; z: string };
+  let recent: Words = { to: null, words: '', x: '', y: '', z: '' };
+  let older: Words = recent;
+  const target = (to: AxisValues): Words => {
+    if (to === recent.to) return recent;
+    if (to !== older.to) {
+      const x = fixed(to.X ?? 0, dl);
+      const y = fixed(to.Y ?? 0, dl);
+      const z = fixed(to.Z ?? 0, dl);
+      older = { to, words: `X${x} Y${y} Z${z}`, x, y, z };
+    }
+    [recent, older] = [older, recent];
+    return recent;
   };
   const blocks = prog.steps.map((s): Block => {
     switch (s.kind) {
-      case 'feature': return { kind: s.kind, comment: commentLines(`Feature ${s.label} ${s.type}, ${s.points} points`, def)[0] };
-      case 'rapid': return { kind: s.kind, words: lin(s.to) };
-      case 'rotary': return { kind: s.kind, words: rot(s.to) };
-      case 'backoff': return { kind: s.kind, words: lin(s.by), feed: feed(s.feed) };
-      case 'record': {
-        const uuid = def.trip.uuidCase === 'upper' ? s.uuid.toUpperCase() : s.uuid;
-        return { kind: s.kind, record: fill(def.trip.record, { uuid, values }) };
-      }
+      case 'feature': return block(s.kind, '', '', '', '', '', '', commentLines(`Feature ${s.label} ${s.type}, ${s.points} points`, def)[0]);
+      case 'rapid': return block(s.kind, lin(s.to));
+      case 'rotary': return block(s.kind, rot(s.to));
+      case 'backoff': return block(s.kind, lin(s.by), feed(s.feed));
+      case 'record': return block(s.kind, '', '', '', '', '', recordParts.join(def.trip.uuidCase === 'upper' ? s.uuid.toUpperCase() : s.uuid));
       default: {
-        const x = fixed(s.to.X ?? 0, dl);
-        const y = fixed(s.to.Y ?? 0, dl);
-        const z = fixed(s.to.Z ?? 0, dl);
-        return { kind: s.kind, words: `X${x} Y${y} Z${z}`, feed: feed(s.feed), x, y, z };
+        const w = target(s.to);
+        return block(s.kind, w.words, feed(s.feed), w.x, w.y, w.z);
       }
     }
   });
