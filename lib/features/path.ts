@@ -53,6 +53,3 @@ export function featurePath(f: Feature, starts: Vec3[], clearanceMm: number, too
     safeOut: ontoHeight(last, toolAxis, safeH),
   };
 }
-
-/** Every point of a path, for limit checks. */
-export const pathPoints = (p: FeaturePath): Vec3[] => [p.safeIn, p.entry, ...p.before.flat(), ...p.after.flat(), p.exit, p.safeOut];

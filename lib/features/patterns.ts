@@ -55,21 +55,30 @@ export function spreadOverRectangle(n: number, hu: number, hv: number, blocked: 
   return chosen;
 }
 
-/** Reorders 2-D points into a nearest-neighbour chain from the first (short travel). */
+/** Reorders 2-D points into a nearest-neighbour chain from the first (short travel); `at` is called once per item. */
 export function nearestNeighbourOrder<T>(items: T[], at: (t: T) => Point2): T[] {
   if (items.length < 3) return items.slice();
-  const left = items.slice(1);
+  const xs = new Float64Array(items.length);
+  const ys = new Float64Array(items.length);
+  items.forEach((t, i) => {
+    const [a, b] = at(t);
+    xs[i] = a;
+    ys[i] = b;
+  });
+  const left = Array.from({ length: items.length - 1 }, (_, k) => k + 1);
   const out: T[] = [items[0] as T];
+  let last = 0;
   while (left.length > 0) {
-    const [x, y] = at(out[out.length - 1] as T);
+    const x = xs[last]!;
+    const y = ys[last]!;
     let best = 0;
     let bestD = Infinity;
-    left.forEach((t, k) => {
-      const [a, b] = at(t);
-      const d = (a - x) ** 2 + (b - y) ** 2;
+    for (let k = 0; k < left.length; k++) {
+      const d = (xs[left[k]!]! - x) ** 2 + (ys[left[k]!]! - y) ** 2;
       if (d < bestD) { bestD = d; best = k; }
-    });
-    out.push(left.splice(best, 1)[0] as T);
+    }
+    last = left.splice(best, 1)[0]!;
+    out.push(items[last] as T);
   }
   return out;
 }

@@ -10,7 +10,7 @@
  */
 import { addScaled, cross, dot, GeometryError, normalize, perpendicular, type Vec3 } from '../geometry/vec3';
 import { prepareMachine, rotaryValues, type PreparedMachine } from '../kinematics/machine';
-import { linearMapFor, solveOrientation, solutionsFor, type OrientationResult } from '../kinematics/inverse';
+import { linearAxesMap, linearAxisAt, linearAxisOf, solveOrientation, solutionsFor, type LinearAxesMap, type OrientationResult } from '../kinematics/inverse';
 import type { AxisValues } from '../kinematics/schema';
 import type { Plan, PlanWarning, TouchPoint } from '../program/plan-schema';
 import type { Feature } from './schema';
@@ -19,10 +19,10 @@ import { characteristicsByFeature } from './counts';
 import { planContacts, type Contact } from './contacts';
 import { featureAxis, geometryKey } from './feature-geometry';
 import { partClearances, probeRadius, safeHeight } from './clearance';
-import { featurePath, pathPoints } from './path';
+import { featurePath, type FeaturePath } from './path';
 import { nearestNeighbourOrder } from './patterns';
 import { footprintSources } from './footprints';
-import { geometryName, touchPointUuid } from './touch-point-uuid';
+import { geometryName, touchPointNamer } from './touch-point-uuid';
 
 interface Planned { f: Feature; axis: Vec3; contacts: Contact[]; starts: Vec3[] }
 interface Group { axis: Vec3; items: Planned[] }
@@ -52,6 +52,7 @@ export function planProgram(input: PlanInput): Plan {
   const clearances = partClearances(part, probe);
   const touchPoints: TouchPoint[] = [];
   let current: AxisValues = Object.fromEntries(pm.rotaries.map((x) => [x.name, 0]));
+  const maps = linearMapCache(pm);
   const left = [...groups.values()];
   while (left.length > 0) {
     const { index, orientation } = nextGroup(pm, left, current);
@@ -63,10 +64,10 @@ export function planProgram(input: PlanInput): Plan {
     const safeH = safeHeight(part, probe, g.axis, clearances);
     for (const it of orderInGroup(g)) {
       const clearance = clearances.get(it.f.uuid) ?? probe.clearance;
-      const picked = pickRotaries(pm, it, orientation.value, current, featurePath(it.f, it.starts, clearance, g.axis, safeH));
+      const picked = pickRotaries(pm, maps, it, orientation.value, current, featurePath(it.f, it.starts, clearance, g.axis, safeH));
       if (!picked.ok) { warn(it.f, picked.code, `${it.f.label}: ${picked.message}; feature not planned`); continue; }
       current = picked.value;
-      emitPoints(it, r, probe.overtravel, pm, current, touchPoints);
+      emitPoints(it, r, probe.overtravel, pm, current, maps(current), touchPoints);
     }
   }
   return { touchPoints, warnings };
@@ -123,8 +124,25 @@ function orderInGroup(g: Group): Planned[] {
   });
 }
 
+/**
+ * `linearAxesMap` by rotary setting, remembering the last few settings (features of a
+ * group mostly share one): the same angles give the very same map.
+ */
+function linearMapCache(pm: PreparedMachine): (rot: AxisValues) => LinearAxesMap {
+  const names = pm.rotaries.map((x) => x.name);
+  const recent: { rot: AxisValues; map: LinearAxesMap }[] = [];
+  return (rot) => {
+    const hit = recent.find((e) => names.every((n) => Object.is(e.rot[n], rot[n])));
+    if (hit) return hit.map;
+    const map = linearAxesMap(pm, rot);
+    recent.unshift({ rot, map });
+    if (recent.length > 4) recent.pop();
+    return map;
+  };
+}
+
 /** One rotary setting for the whole feature: least travel first, every path point inside travel. */
-function pickRotaries(pm: PreparedMachine, it: Planned, orientation: OrientationResult, current: AxisValues, path: ReturnType<typeof featurePath>): Outcome<AxisValues> {
+function pickRotaries(pm: PreparedMachine, maps: (rot: AxisValues) => LinearAxesMap, it: Planned, orientation: OrientationResult, current: AxisValues, path: FeaturePath): Outcome<AxisValues> {
   const first = it.starts[0];
   if (!first) return { ok: false, code: 'NO_POINTS', message: 'no touch points' };
   let sols: AxisValues[];
@@ -134,39 +152,68 @@ function pickRotaries(pm: PreparedMachine, it: Planned, orientation: Orientation
   } catch (e) {
     return failure(e);
   }
-  const pts = [...it.starts, ...it.contacts.map((c, i) => addScaled(it.starts[i]!, c.normal, -1)), ...pathPoints(path)];
   let firstProblem: { code: string; message: string } | null = null;
   for (const s of sols) {
     const rot = rotaryValues(pm, s);
-    const problem = outsideTravel(pm, pts, rot);
+    const problem = outsideTravel(pm, maps(rot), it, path);
     if (!problem) return { ok: true, value: rot };
     firstProblem ??= problem;
   }
   return { ok: false, ...(firstProblem ?? { code: 'OUT_OF_LIMITS', message: 'out of travel' }) };
 }
 
-function outsideTravel(pm: PreparedMachine, pts: Vec3[], rot: AxisValues): { code: string; message: string } | null {
-  const map = linearMapFor(pm, rot);
-  for (const p of pts) {
-    const lin = map(p);
-    for (const w of ['X', 'Y', 'Z'] as const) {
+const WORDS = ['X', 'Y', 'Z'] as const;
+
+/**
+ * The first point outside linear travel, in the order: starts, the points 1 mm past each
+ * start toward its contact, then the path (safe-in, entry, before, after, exit, safe-out).
+ */
+function outsideTravel(pm: PreparedMachine, map: LinearAxesMap, it: Planned, path: FeaturePath): { code: string; message: string } | null {
+  const outside = (x: number, y: number, z: number): { code: string; message: string } | null => {
+    for (let k = 0 as 0 | 1 | 2; k < 3; k++) {
+      const w = WORDS[k];
       const [lo, hi] = pm.machine.linear[w];
-      if (lin[w] < lo - 1e-9 || lin[w] > hi + 1e-9) {
-        return { code: 'OUT_OF_LIMITS', message: `${w} would be ${lin[w].toFixed(3)} mm, outside its travel ${lo} to ${hi} mm` };
+      const v = linearAxisAt(map, x, y, z, k);
+      if (v < lo - 1e-9 || v > hi + 1e-9) {
+        return { code: 'OUT_OF_LIMITS', message: `${w} would be ${v.toFixed(3)} mm, outside its travel ${lo} to ${hi} mm` };
       }
     }
+    return null;
+  };
+  const inList = (pts: Vec3[]) => {
+    for (const p of pts) {
+      const problem = outside(p[0], p[1], p[2]);
+      if (problem) return problem;
+    }
+    return null;
+  };
+  const atStarts = inList(it.starts);
+  if (atStarts) return atStarts;
+  for (let i = 0; i < it.contacts.length; i++) {
+    const s = it.starts[i]!;
+    const n = it.contacts[i]!.normal;
+    // addScaled(s, n, -1), as scalars
+    const problem = outside(s[0] + n[0] * -1, s[1] + n[1] * -1, s[2] + n[2] * -1);
+    if (problem) return problem;
+  }
+  for (const pts of [[path.safeIn, path.entry], ...path.before, ...path.after, [path.exit, path.safeOut]]) {
+    const problem = inList(pts);
+    if (problem) return problem;
   }
   return null;
 }
 
-function emitPoints(it: Planned, r: number, overtravel: number, pm: PreparedMachine, rot: AxisValues, out: TouchPoint[]): void {
-  const key = geometryName(geometryKey(it.f));
-  const map = linearMapFor(pm, rot);
-  it.contacts.forEach((c, i) => {
+function emitPoints(it: Planned, r: number, overtravel: number, pm: PreparedMachine, rot: AxisValues, map: LinearAxesMap, out: TouchPoint[]): void {
+  const uuidOf = touchPointNamer(it.f.uuid, geometryName(geometryKey(it.f)));
+  for (let i = 0; i < it.contacts.length; i++) {
+    const c = it.contacts[i]!;
     const target = addScaled(c.surface, c.normal, r);
     const start = it.starts[i]!;
+    // keys X, Y, Z, then the rotaries in chain order
+    const axes: AxisValues = { X: linearAxisOf(map, start, 0), Y: linearAxisOf(map, start, 1), Z: linearAxisOf(map, start, 2) };
+    for (const x of pm.rotaries) axes[x.name] = rot[x.name]!;
     out.push({
-      uuid: touchPointUuid(it.f.uuid, key, i),
+      uuid: uuidOf(i),
       featureUuid: it.f.uuid,
       seq: out.length,
       surface: c.surface,
@@ -176,7 +223,7 @@ function emitPoints(it: Planned, r: number, overtravel: number, pm: PreparedMach
       start,
       end: addScaled(target, c.normal, -overtravel),
       toolAxis: it.axis,
-      axes: { ...map(start), ...rot },
+      axes,
     });
-  });
+  }
 }

@@ -54,11 +54,16 @@ export function machineToPart(pm: PreparedMachine, axes: AxisValues, tipM: Vec3,
 
 /** Part-frame point (or direction, with `isDirection`) → machine frame at the given table angles. */
 export function partToMachine(pm: PreparedMachine, axes: AxisValues, p: Vec3, isDirection = false): Vec3 {
+  return partToMachineWith(pm, rotationsAt(pm.tables, axes), p, isDirection);
+}
+
+/** `partToMachine` with the tables' rotation matrices (`rotationsAt(pm.tables, axes)`) given, for many points. */
+export function partToMachineWith(pm: PreparedMachine, tableRotations: Mat3[], p: Vec3, isDirection = false): Vec3 {
   let q = applyMat(pm.setupR, p);
   if (!isDirection) q = add(q, pm.setupOrigin);
   for (let i = pm.tables.length - 1; i >= 0; i--) {
     const t = pm.tables[i] as PreparedRotary;
-    const R = axisAngle(t.w, angleOf(axes, t));
+    const R = tableRotations[i] as Mat3;
     q = isDirection ? applyMat(R, q) : add(applyMat(R, sub(q, t.p)), t.p);
   }
   return q;

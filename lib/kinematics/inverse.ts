@@ -15,7 +15,7 @@
  */
 import { addScaled, cross, dot, GeometryError, norm, normalize, reject, scale, sub, type Vec3 } from '../geometry/vec3';
 import { applyMat, toDeg, wrapDeg } from '../geometry/rotation';
-import { headOffset, partToMachine } from './forward';
+import { headOffset, partToMachine, partToMachineWith, rotationsAt } from './forward';
 import { prepareMachine, type PreparedMachine, type PreparedRotary } from './machine';
 import type { AxisValues, Machine } from './schema';
 import { chooseSolution } from './choose';
@@ -147,22 +147,39 @@ export function linearAxesFor(machine: Machine | PreparedMachine, tipP: Vec3, ro
 }
 
 /**
- * `linearAxesFor` at fixed rotary angles as a map for many points: at fixed angles the
- * tip → linear axes relation is affine, so it is sampled once at the origin and the three
- * unit points and then applied (rounding below 1e-12 mm for part sizes of metres).
+ * `linearAxesFor` at fixed rotary angles, as an affine map: (X, Y, Z) = o + p[0]·c[0] +
+ * p[1]·c[1] + p[2]·c[2], sampled once at the origin and the three unit points (rounding
+ * below 1e-12 mm for part sizes of metres). `linearAxisOf` applies it.
  */
-export function linearMapFor(machine: Machine | PreparedMachine, rotaries: AxisValues): (tipP: Vec3) => { X: number; Y: number; Z: number } {
+export interface LinearAxesMap { o: Vec3; c: [Vec3, Vec3, Vec3] }
+
+export function linearAxesMap(machine: Machine | PreparedMachine, rotaries: AxisValues): LinearAxesMap {
   const pm = prepareMachine(machine);
-  const o = linearAxesFor(pm, [0, 0, 0], rotaries);
-  const c = ([[1, 0, 0], [0, 1, 0], [0, 0, 1]] as Vec3[]).map((e) => {
-    const v = linearAxesFor(pm, e, rotaries);
-    return [v.X - o.X, v.Y - o.Y, v.Z - o.Z] as Vec3;
-  }) as [Vec3, Vec3, Vec3];
-  return (p) => ({
-    X: o.X + c[0][0] * p[0] + c[1][0] * p[1] + c[2][0] * p[2],
-    Y: o.Y + c[0][1] * p[0] + c[1][1] * p[1] + c[2][1] * p[2],
-    Z: o.Z + c[0][2] * p[0] + c[1][2] * p[1] + c[2][2] * p[2],
-  });
+  const h = headOffset(pm, rotaries).tip;
+  const tables = rotationsAt(pm.tables, rotaries);
+  const at = (p: Vec3): Vec3 => {
+    const tipM = partToMachineWith(pm, tables, p);
+    return [tipM[0] - h[0], tipM[1] - h[1], tipM[2] - h[2]];
+  };
+  const o = at([0, 0, 0]);
+  const col = (e: Vec3): Vec3 => {
+    const v = at(e);
+    return [v[0] - o[0], v[1] - o[1], v[2] - o[2]];
+  };
+  return { o, c: [col([1, 0, 0]), col([0, 1, 0]), col([0, 0, 1])] };
+}
+
+/** Linear axis `k` (0 = X, 1 = Y, 2 = Z) of the part-frame tip (x, y, z) under a `linearAxesMap`. */
+export const linearAxisAt = (m: LinearAxesMap, x: number, y: number, z: number, k: 0 | 1 | 2): number =>
+  m.o[k] + m.c[0][k] * x + m.c[1][k] * y + m.c[2][k] * z;
+
+/** Linear axis `k` (0 = X, 1 = Y, 2 = Z) of part-frame tip `p` under a `linearAxesMap`. */
+export const linearAxisOf = (m: LinearAxesMap, p: Vec3, k: 0 | 1 | 2): number => linearAxisAt(m, p[0], p[1], p[2], k);
+
+/** `linearAxesFor` at fixed rotary angles as a function for many points (see `linearAxesMap`). */
+export function linearMapFor(machine: Machine | PreparedMachine, rotaries: AxisValues): (tipP: Vec3) => { X: number; Y: number; Z: number } {
+  const m = linearAxesMap(machine, rotaries);
+  return (p) => ({ X: linearAxisOf(m, p, 0), Y: linearAxisOf(m, p, 1), Z: linearAxisOf(m, p, 2) });
 }
 
 /** Every angle equivalent to `raw` that the rotary may take (nearest `prev` when continuous). */
@@ -179,17 +196,19 @@ export function equivalentAngles(r: PreparedRotary, raw: number, prev: number, f
 
 interface Violation { word: string; value: number; lo: number; hi: number; unit: string }
 
-function expandBranch(pm: PreparedMachine, branch: Record<string, number>, previous: AxisValues, freeNames: string[], violations: Violation[]): AxisValues[] {
-  let combos: Record<string, number>[] = [{}];
+/** Every combination of equivalent angles of a branch, as angle lists in `pm.rotaries` order (the first rotary varying slowest). */
+function expandBranch(pm: PreparedMachine, branch: Record<string, number>, previous: AxisValues, freeNames: string[], violations: Violation[]): number[][] {
+  let combos: number[][] = [[]];
   for (const r of pm.rotaries) {
     const raw = branch[r.name] ?? 0;
     const prev = previous[r.name] ?? 0;
     const free = freeNames.includes(r.name);
     const eq = equivalentAngles(r, raw, prev, free);
     if (eq.length === 0) violations.push({ word: r.name, value: raw, lo: r.min ?? 0, hi: r.max ?? 0, unit: '°' });
-    combos = combos.flatMap((c) => eq.map((v) => ({ ...c, [r.name]: v })));
+    if (eq.length === 1) for (const c of combos) c.push(eq[0]!);
+    else combos = combos.flatMap((c) => eq.map((v) => [...c, v]));
   }
-  return combos.map((c) => c as AxisValues);
+  return combos;
 }
 
 function withinLinear(pm: PreparedMachine, s: AxisValues, violations: Violation[]): boolean {
@@ -213,8 +232,14 @@ export function solutionsFor(machine: Machine | PreparedMachine, tipP: Vec3, ori
   const violations: Violation[] = [];
   const solutions: AxisValues[] = [];
   for (const branch of orientation.branches) {
-    for (const rot of expandBranch(pm, branch, previous, orientation.free, violations)) {
-      const s: AxisValues = { ...linearAxesFor(pm, tipP, rot), ...rot };
+    for (const angles of expandBranch(pm, branch, previous, orientation.free, violations)) {
+      // keys X, Y, Z first, then the rotaries in chain order
+      const s: AxisValues = { X: 0, Y: 0, Z: 0 };
+      pm.rotaries.forEach((r, i) => { s[r.name] = angles[i]!; });
+      const lin = linearAxesFor(pm, tipP, s);
+      s.X = lin.X;
+      s.Y = lin.Y;
+      s.Z = lin.Z;
       if (withinLinear(pm, s, violations) && !solutions.some((o) => same(o, s))) solutions.push(s);
     }
   }
