@@ -5,13 +5,19 @@
  * 2·|Δ| for a sphere; 2·|Δ| across the width for a slot or web. Bonus at MMC / LMC per
  * ASME Y14.5 [from memory, REFERENCES.md §3]: the departure of the actual size from the
  * material-condition size, added to the stated tolerance; the virtual condition is the
- * MMC (LMC) size ∓ the tolerance. The actual size used is the least-squares size
- * (Y14.5 uses the actual mating envelope; they differ by no more than the form error).
+ * MMC (LMC) size ∓ the tolerance. The actual size for the bonus is the mating size
+ * (Y14.5's actual mating envelope, with the least-squares axis direction): the largest
+ * empty circle of a bore's contact points, the smallest enclosing circle of a boss's,
+ * the narrowest (widest) pair of planes at the fitted orientation for a slot (web).
+ * A sphere, or contact points that do not surround a centre, fall back to the
+ * least-squares size, and the result says so.
  */
 import type { Feature, Tolerance } from '../features/schema';
 import { correctLength } from '../capability/temperature';
 import { addScaled, dot, norm, normalize, reject, scale, sub, type Vec3 } from '../geometry/vec3';
 import { FitCodeError, resolveFitCode } from './iso286';
+import { circumscribedCircle, inscribedCircle } from '../fitting/mating';
+import { FitError } from '../fitting/types';
 import { datumAlignment, notEvaluated, type EvalContext, type RawResult } from './context';
 import type { FeatureMeasurement } from './measure-feature';
 
@@ -53,6 +59,30 @@ export function measuredSize(m: FeatureMeasurement): number | null {
   return null;
 }
 
+/** Mating size of a measured feature (before temperature correction), or null where none is defined. */
+export function matingSize(m: FeatureMeasurement): { size: number; method: string } | null {
+  const e = m.element;
+  if (e.kind === 'axis') {
+    try {
+      const c = e.internal ? inscribedCircle(m.contacts, e.point, e.axis) : circumscribedCircle(m.contacts, e.point, e.axis);
+      return { size: c.diameter, method: `${e.internal ? 'largest empty' : 'smallest enclosing'} circle of ${m.contacts.length} contact points across the least-squares axis` };
+    } catch (err) {
+      if (err instanceof FitError) return null;
+      throw err;
+    }
+  }
+  if (e.kind === 'slot') {
+    let hiMin = Infinity, hiMax = -Infinity, loMin = Infinity, loMax = -Infinity;
+    for (const c of m.contacts) {
+      const d = dot(sub(c, e.mid), e.widthDir);
+      if (d > 0) { hiMin = Math.min(hiMin, d); hiMax = Math.max(hiMax, d); } else { loMin = Math.min(loMin, d); loMax = Math.max(loMax, d); }
+    }
+    if (!Number.isFinite(hiMin) || !Number.isFinite(loMin)) return null;
+    return { size: e.internal ? hiMin - loMax : hiMax - loMin, method: `${e.internal ? 'narrowest' : 'widest'} pair of planes across the fitted width direction` };
+  }
+  return null;
+}
+
 export function evaluateSize(ctx: EvalContext, tol: Tolerance, m: FeatureMeasurement): RawResult {
   const f = m.feature;
   const wants = tol.characteristic === 'width' ? ['slot', 'web'] : ['bore', 'boss', 'sphere'];
@@ -74,6 +104,8 @@ function sizeToleranceOf(ctx: EvalContext, f: Feature): Tolerance | undefined {
 
 interface Bonus { bonus: number; virtualCondition: number; note: string }
 
+const LIMIT_EPS_MM = 1e-9;
+
 function bonusFor(ctx: EvalContext, tol: Tolerance, m: FeatureMeasurement, zone: number): Bonus | { error: string } | null {
   const mat = tol.material ?? 'RFS';
   if (mat === 'RFS') return null;
@@ -83,16 +115,19 @@ function bonusFor(ctx: EvalContext, tol: Tolerance, m: FeatureMeasurement, zone:
   if ('error' in limits) return { error: `size tolerance of ${m.feature.label}: ${limits.error}` };
   const min = limits.nominal + limits.lower;
   const max = limits.nominal + limits.upper;
-  const actual = correctLength(measuredSize(m) as number, ctx.input.conditions.partTemperatureC, ctx.material).value;
+  const mating = matingSize(m);
+  const actual = correctLength(mating?.size ?? (measuredSize(m) as number), ctx.input.conditions.partTemperatureC, ctx.material).value;
+  const basis = mating ? `mating size (${mating.method})` : 'least-squares size (no mating envelope for this feature)';
   const internal = isInternal(m.feature);
   const mmc = mat === 'MMC';
   const conditionSize = internal === mmc ? min : max;
   const departure = internal === mmc ? actual - conditionSize : conditionSize - actual;
   const virtualCondition = internal === mmc ? conditionSize - zone : conditionSize + zone;
-  if (departure < 0 || actual < min || actual > max) {
-    return { bonus: 0, virtualCondition, note: `actual size ${actual.toFixed(4)} is outside ${min.toFixed(4)}–${max.toFixed(4)}: no bonus` };
+  // a size on a limit to within rounding (1e-9 mm) counts as on it
+  if (departure < -LIMIT_EPS_MM || actual < min - LIMIT_EPS_MM || actual > max + LIMIT_EPS_MM) {
+    return { bonus: 0, virtualCondition, note: `actual ${basis} ${actual.toFixed(4)} is outside ${min.toFixed(4)}–${max.toFixed(4)}: no bonus` };
   }
-  return { bonus: departure, virtualCondition, note: `bonus ${departure.toFixed(4)} = departure of the actual size ${actual.toFixed(4)} from ${mat} ${conditionSize.toFixed(4)}` };
+  return { bonus: Math.max(0, departure), virtualCondition, note: `bonus ${Math.max(0, departure).toFixed(4)} = departure of the actual ${basis} ${actual.toFixed(4)} from ${mat} ${conditionSize.toFixed(4)}` };
 }
 
 export function evaluatePosition(ctx: EvalContext, tol: Tolerance, m: FeatureMeasurement): RawResult {

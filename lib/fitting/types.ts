@@ -11,7 +11,8 @@ export type FitErrorCode =
   | 'COPLANAR_POINTS'
   | 'NOT_FINITE'
   | 'NO_CONVERGENCE'
-  | 'UNSUPPORTED_METHOD';
+  | 'UNSUPPORTED_METHOD'
+  | 'NOT_SURROUNDED';
 
 /** A degenerate or impossible fit: typed, with a message in words (never NaN). */
 export class FitError extends Error {
