@@ -9,7 +9,6 @@
  * at the measuring feed ending at `end`, the TRIP record, a retract to the start, and
  * protected moves back up to the safe plane.
  */
-import { distance, type Vec3 } from '../geometry/vec3';
 import { partToMachine } from '../kinematics/forward';
 import { linearMapFor } from '../kinematics/inverse';
 import { prepareMachine, rotaryValues, type PreparedMachine } from '../kinematics/machine';
@@ -56,7 +55,8 @@ function runs(points: TouchPoint[]): TouchPoint[][] {
 }
 
 const sameRotaries = (a: AxisValues | null, b: AxisValues): boolean => a !== null && Object.keys(b).every((k) => Math.abs((a[k] ?? 0) - (b[k] ?? 0)) < 1e-9);
-const xyz = (a: AxisValues): Vec3 => [a.X ?? 0, a.Y ?? 0, a.Z ?? 0];
+/** Distance between two linear positions (mm). */
+const gapOf = (a: AxisValues, b: AxisValues): number => Math.hypot((a.X ?? 0) - (b.X ?? 0), (a.Y ?? 0) - (b.Y ?? 0), (a.Z ?? 0) - (b.Z ?? 0));
 
 export function buildProgram(plan: Plan, part: Part, probe: Probe, machine: Machine | PreparedMachine): NeutralProgram {
   const pm = prepareMachine(machine);
@@ -65,15 +65,15 @@ export function buildProgram(plan: Plan, part: Part, probe: Probe, machine: Mach
   const clearances = partClearances(part, probe);
   const safeByAxis = new Map<string, number>();
   const steps: Step[] = [];
-  let at: Vec3 | null = null;
+  let at: AxisValues | null = null;
   let rot: AxisValues | null = null;
   const protectedTo = (to: AxisValues) => {
-    const p = xyz(to);
-    if (at && distance(at, p) < MIN_PROBE_MOVE_MM) return;
+    if (at && gapOf(at, to) < MIN_PROBE_MOVE_MM) return;
     steps.push({ kind: 'protected', to, feed: probe.fastFeed });
-    at = p;
+    at = to;
   };
-  for (const run of runs(plan.touchPoints)) {
+  const featureRuns = runs(plan.touchPoints);
+  for (const run of featureRuns) {
     const first = run[0]!;
     const f = features.get(first.featureUuid);
     if (!f) throw new Error(`touch point ${first.uuid} names feature ${first.featureUuid}, which the part does not have`);
@@ -93,13 +93,13 @@ export function buildProgram(plan: Plan, part: Part, probe: Probe, machine: Mach
       rot = r;
     }
     steps.push({ kind: 'rapid', to: safeIn });
-    at = xyz(safeIn);
+    at = safeIn;
     protectedTo(linear(path.entry));
     const back = backoffDistance(probe);
     run.forEach((tp, i) => {
       for (const b of path.before[i] ?? []) protectedTo(linear(b));
       const start = linear(tp.start);
-      const gap = at ? distance(at, xyz(start)) : Infinity;
+      const gap = at ? gapOf(at, start) : Infinity;
       // starts closer than a probe move allows (e.g. a pair across a narrow slot): go via a point 1 mm up the axis
       if (gap >= 1e-9 && gap < MIN_PROBE_MOVE_MM) protectedTo(linear([tp.start[0] + t[0], tp.start[1] + t[1], tp.start[2] + t[2]]));
       protectedTo(start);
@@ -110,12 +110,12 @@ export function buildProgram(plan: Plan, part: Part, probe: Probe, machine: Mach
       steps.push({ kind: 'touch', to: end, feed: probe.measureFeed, pass: 'slow' });
       steps.push({ kind: 'record', uuid: tp.uuid });
       steps.push({ kind: 'retract', to: start, feed: probe.fastFeed });
-      at = xyz(start);
+      at = start;
       for (const a of path.after[i] ?? []) protectedTo(linear(a));
     });
     protectedTo(linear(path.exit));
     protectedTo(linear(path.safeOut));
   }
   steps.push({ kind: 'rapid', to: { Z: zTop } });
-  return { steps, zTop, rotaryNames: pm.rotaries.map((x) => x.name).sort(), touchPoints: plan.touchPoints.length, features: runs(plan.touchPoints).length };
+  return { steps, zTop, rotaryNames: pm.rotaries.map((x) => x.name).sort(), touchPoints: plan.touchPoints.length, features: featureRuns.length };
 }
