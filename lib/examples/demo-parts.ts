@@ -1,6 +1,7 @@
 /**
- * Demo engine inputs for Probity's invented shop scenario (the app's seed reuses them):
- * three parts, one probe. Part numbers, sizes and tolerances are made up for the demo;
+ * Demo engine inputs for Probity's invented shop scenario, for the command line, the
+ * golden programs and the engine tests: three parts, one probe. (The app's demo
+ * workspaces are seeded from their own parts in db/seed-data.ts.) Part numbers, sizes and tolerances are made up for the demo;
  * they follow ordinary drawing practice (ISO 286 fits, GD&T frames) but describe no real part.
  * Part frame: origin at the top face centre, +Z out of the top face, mm.
  */
