@@ -2,95 +2,230 @@
  * Reads a posted program back line by line with the post's own grammar: blocks of words,
  * comments, trip records, the checks after probe moves, and the statements the
  * definition and templates write verbatim. Anything else is an unknown line.
+ *
+ * Built for 100,000-line programs: a line is scanned in place in the program text into a
+ * reusable slot (word values by index with a presence mask, codes as small numbers);
+ * strings are cut only for what a finding or a further test needs.
  */
 import type { PostDefinition } from './postprocessor-schema';
 import type { PostGrammar } from './render';
 
-export type ReadLine =
-  | { t: 'blank' }
-  | { t: 'comment'; text: string }
-  | { t: 'record'; uuid: string }
-  | { t: 'fixed'; text: string }
-  | { t: 'protectedCheck'; xyz: number[] }
-  | { t: 'touchCheck'; xyz: number[] }
-  | { t: 'block'; codes: string[]; words: Record<string, number>; unknown: string[] }
-  | { t: 'unknown'; text: string };
+/** Line kinds (`ReadSlot.t`). */
+export const BLANK = 0;
+export const COMMENT = 1;
+export const RECORD = 2;
+export const FIXED = 3;
+export const PROTECTED_CHECK = 4;
+export const TOUCH_CHECK = 5;
+export const BLOCK = 6;
+export const UNKNOWN = 7;
 
-const escapeRe = (s: string) => s.replace(/[.*+?^${}()|[\]\\#]/g, '\\$&');
-/** The number after a word's letter (A–Z then an optionally signed decimal), or null. */
-function numberOf(tok: string): number | null {
-  const c = tok.charCodeAt(0);
-  if (c < 65 || c > 90 || tok.length < 2) return null;
-  let digits = 0;
-  for (let i = 1; i < tok.length; i++) {
-    const d = tok.charCodeAt(i);
-    if (d >= 48 && d <= 57) digits++;
-    else if (!(d === 46 || ((d === 45 || d === 43) && i === 1))) return null;
-  }
-  if (digits === 0) return null;
-  const v = Number(tok.slice(1));
-  return Number.isFinite(v) ? v : null;
+/** What a motion code makes a block (`Reader.codeKind`); SKIP is told apart by the line after it. */
+export const NO_MOTION = 0;
+export const RAPID = 1;
+export const FEED = 2;
+export const PROTECTED = 3;
+export const TOUCH = 4;
+export const SKIP = 5;
+
+/** One read line. `src.slice(start, end)` is the line as read: trimmed, tabs as spaces, block number removed. */
+export class ReadSlot {
+  t = BLANK;
+  src = '';
+  start = 0;
+  end = 0;
+  /** Record: the uuid, lower case. */
+  uuid = '';
+  /** Block: code indices into `Reader.codes`, in line order (first `nCodes`). */
+  codes: number[] = [];
+  nCodes = 0;
+  /** Block: word values by index into `Reader.words`; bit i of `mask` set when word i is present. */
+  values: Float64Array;
+  mask = 0;
+  /** Block: the words not understood. */
+  unknown: string[] = [];
+  constructor(words: number) { this.values = new Float64Array(words); }
+  text(): string { return this.src.slice(this.start, this.end); }
 }
 
-export interface Reader { read: (line: string) => ReadLine }
+/** Trip position words X, Y, Z then the rotaries (by letter), and last F. */
+export interface Reader {
+  words: string[];
+  /** Index of F in `words`. */
+  feed: number;
+  codes: string[];
+  codeKind: Uint8Array;
+  /** Reads src[start, end) (one line, without its newline) into `slot`. */
+  read(src: string, start: number, end: number, slot: ReadSlot): void;
+  /** A comment's text (slot.t === COMMENT). */
+  commentText(slot: ReadSlot): string;
+}
+
+const isDigit = (c: number) => c >= 48 && c <= 57;
+/** Exact powers of ten (10^22 is the largest exact double power of ten). */
+const POW10 = Array.from({ length: 23 }, (_, i) => Number(`1e${i}`));
+const TWO_53 = 2 ** 53;
+
+/** Neither white space nor a line end (so trim() leaves it). */
+const TRIM_SAFE = (c: number) => c > 32 && c < 127;
+/** Whether src[a, b) spells c. */
+function spells(c: string, src: string, a: number, b: number): boolean {
+  if (c.length !== b - a) return false;
+  for (let j = 0; j < c.length; j++) if (c.charCodeAt(j) !== src.charCodeAt(a + j)) return false;
+  return true;
+}
 
 export function makeReader(def: PostDefinition, grammar: PostGrammar, rotaryNames: string[], program: string): Reader {
-  const words = ['X', 'Y', 'Z', ...rotaryNames];
-  const values = words.map((w) => def.trip.value.replace('{word}', w).replace('{var}', def.trip.variables[w] ?? '#0')).join(def.trip.separator);
-  const [pre, post] = def.trip.record.split('{uuid}') as [string, string];
-  const recordRe = new RegExp(`^${escapeRe(pre)}([0-9A-Fa-f-]{36})${escapeRe(post.replace('{values}', values))}$`);
+  const words = [...new Set(['X', 'Y', 'Z', ...rotaryNames, 'F'])];
+  const feed = words.indexOf('F');
+  const values = ['X', 'Y', 'Z', ...rotaryNames].map((w) => def.trip.value.replace('{word}', w).replace('{var}', def.trip.variables[w] ?? '#0')).join(def.trip.separator);
+  const [recPre, recPostRaw] = def.trip.record.split('{uuid}') as [string, string];
+  const recPost = recPostRaw.replace('{values}', values);
   const fill = (l: string) => l.replace('{program}', program);
   const fixed = new Set([
     ...grammar.fixedLines, ...def.programStart.map(fill), ...def.programEnd, ...def.probeOn, ...def.probeOff,
     ...def.trip.open.map(fill), ...def.trip.close, ...def.stops.miss, ...def.stops.hit,
   ]);
-  const known = new Set(def.knownCodes);
-  const axisWords = new Set(words);
-  const numberRe = def.lineNumbers.enabled ? new RegExp(`^${def.lineNumbers.letter}\\d+ `) : null;
+  // a line can equal a fixed statement only if it has its length and first and last characters
+  const fixedKey = (s: string, a: number, b: number) => (b - a) * 0x40000 + (s.charCodeAt(a) & 0x1ff) * 0x200 + (s.charCodeAt(b - 1) & 0x1ff);
+  const fixedKeys = new Set([...fixed].filter((l) => l !== '').map((l) => fixedKey(l, 0, l.length)));
+  const fixedFirst = new Uint8Array(128);
+  let fixedNonAscii = false;
+  for (const l of fixed) if (l !== '') { if (l.charCodeAt(0) < 128) fixedFirst[l.charCodeAt(0)] = 1; else fixedNonAscii = true; }
+  const codes = [...new Set(def.knownCodes)];
+  const codeKind = new Uint8Array(codes.map((c) => (c === 'G0' ? RAPID : c === 'G1' ? FEED : grammar.protectedCodes.includes(c) ? PROTECTED
+    : grammar.touchCodes.includes(c) ? TOUCH : grammar.skipCodes.includes(c) ? SKIP : NO_MOTION)));
+  // G and M codes by number (code = letter + String(value), as a block writes it)
+  const byNumber = new Map<string, Map<number, number>>([['G', new Map()], ['M', new Map()]]);
+  codes.forEach((c, i) => {
+    const m = byNumber.get(c[0] ?? '');
+    if (m && `${c[0]}${Number(c.slice(1))}` === c) m.set(Number(c.slice(1)), i);
+  });
+  const gCodes = byNumber.get('G')!;
+  const mCodes = byNumber.get('M')!;
+  // known codes by first letter and length, to find a token's own spelling
+  const spelledKey = (c: number, len: number) => (c & 0x7f) * 32 + Math.min(len, 31);
+  const candidates: number[][] = Array.from({ length: 128 * 32 }, () => []);
+  codes.forEach((c, i) => { if (c.length > 0) candidates[spelledKey(c.charCodeAt(0), c.length)]!.push(i); });
+  const wordAt = new Int8Array(128).fill(-1);
+  words.forEach((w, i) => { if (w.length === 1 && w.charCodeAt(0) < 128 && wordAt[w.charCodeAt(0)] === -1) wordAt[w.charCodeAt(0)] = i; });
+  const numberLetter = def.lineNumbers.enabled ? def.lineNumbers.letter.charCodeAt(0) : -1;
   const { open, close } = def.comments;
+  const labels = grammar.labelPrefixes;
+
+  /** Known code spelled exactly by src[a, b), or -1. */
+  function codeSpelled(src: string, a: number, b: number): number {
+    const list = candidates[spelledKey(src.charCodeAt(a), b - a)]!;
+    for (let k = 0; k < list.length; k++) if (spells(codes[list[k]!]!, src, a, b)) return list[k]!;
+    return -1;
+  }
+
+  /**
+   * Words split at spaces. A word is a letter A–Z then an optionally signed decimal; its value
+   * equals Number() of the text: an integer mantissa below 2^53 over an exact power of ten is one
+   * correctly rounded division, as Number() rounds (IEEE 754 §5.4.2); longer texts go to Number().
+   */
+  function block(src: string, s: number, e: number, slot: ReadSlot): void {
+    slot.nCodes = 0;
+    slot.mask = 0;
+    slot.unknown.length = 0;
+    let a = s;
+    while (a < e) {
+      const c = src.charCodeAt(a);
+      if (c === 32) { a++; continue; }
+      let b = a + 1;
+      let ok = c >= 65 && c <= 90;
+      let neg = false;
+      let m = 0;
+      let digits = 0;
+      let frac = -1;
+      if (b < e) {
+        const d = src.charCodeAt(b);
+        if (d === 45) { neg = true; b++; } else if (d === 43) b++;
+      }
+      for (; b < e; b++) {
+        const d = src.charCodeAt(b);
+        if (d === 32) break;
+        if (d >= 48 && d <= 57) { m = m * 10 + (d - 48); digits++; if (frac >= 0) frac++; }
+        else if (d === 46 && frac < 0) frac = 0;
+        else ok = false; // a second point (Number() gives NaN) or another character
+      }
+      let value = NaN;
+      if (ok && digits > 0) {
+        if (m < TWO_53 && frac <= 22) { value = frac > 0 ? m / POW10[frac]! : m; if (neg) value = -value; }
+        else { value = Number(src.slice(a + 1, b)); if (!Number.isFinite(value)) value = NaN; }
+      }
+      if (value !== value) slot.unknown.push(src.slice(a, b));
+      else if (c === 71 || c === 77) {
+        // the token as written if known, else letter + value (G01 → G1)
+        const id = codeSpelled(src, a, b);
+        const byValue = id >= 0 ? id : (c === 71 ? gCodes : mCodes).get(value);
+        if (byValue !== undefined) slot.codes[slot.nCodes++] = byValue;
+        else slot.unknown.push(src.slice(a, b));
+      } else if (c < 128 && wordAt[c]! >= 0) {
+        slot.values[wordAt[c]!] = value;
+        slot.mask |= 1 << wordAt[c]!;
+      } else {
+        const id = codeSpelled(src, a, b);
+        if (id >= 0) slot.codes[slot.nCodes++] = id;
+        else slot.unknown.push(src.slice(a, b));
+      }
+      a = b;
+    }
+    slot.t = slot.nCodes === 0 && slot.mask === 0 ? UNKNOWN : BLOCK;
+  }
+
+  function isRecord(src: string, s: number, e: number): boolean {
+    if (e - s !== recPre.length + 36 + recPost.length || !spells(recPre, src, s, s + recPre.length) || !spells(recPost, src, e - recPost.length, e)) return false;
+    for (let i = s + recPre.length, n = i + 36; i < n; i++) {
+      const c = src.charCodeAt(i);
+      if (!(isDigit(c) || (c >= 65 && c <= 70) || (c >= 97 && c <= 102) || c === 45)) return false;
+    }
+    return true;
+  }
+
+  let tabFrom = 0;
+  let tabAt = -1;
+  let tabSrc: string | null = null;
+  /** Whether src[s, e) holds a tab (one forward search over a program read in order). */
+  function hasTab(src: string, s: number, e: number): boolean {
+    if (src !== tabSrc || s < tabFrom || (tabAt !== -1 && tabAt < s)) { tabSrc = src; tabFrom = s; tabAt = src.indexOf('\t', s); }
+    return tabAt !== -1 && tabAt < e;
+  }
+
   return {
-    read(raw: string): ReadLine {
-      let line = raw.includes('\t') ? raw.replace(/\t/g, ' ').trim() : raw.trim();
-      if (line === '') return { t: 'blank' };
-      if (grammar.labelPrefixes.some((p) => line.startsWith(p))) return { t: 'fixed', text: line };
-      if (numberRe) line = line.replace(numberRe, '');
-      if (fixed.has(line)) return { t: 'fixed', text: line };
-      const c0 = line.charCodeAt(0);
-      if (c0 === 71 /* G */ || c0 === 77 /* M */) return block(line);
-      const rec = recordRe.exec(line);
-      if (rec) return { t: 'record', uuid: (rec[1] as string).toLowerCase() };
-      if (grammar.protectedCheck.test(line)) return { t: 'protectedCheck', xyz: (grammar.protectedCheck.exec(line) ?? []).slice(1).map(Number) };
-      if (grammar.touchCheck?.test(line)) return { t: 'touchCheck', xyz: (grammar.touchCheck.exec(line) ?? []).slice(1).map(Number) };
+    words, feed, codes, codeKind,
+    commentText: (slot) => slot.src.slice(slot.start + open.length, slot.end - close.length),
+    read(src, s, e, slot) {
+      if (s < e && !(TRIM_SAFE(src.charCodeAt(s)) && TRIM_SAFE(src.charCodeAt(e - 1)) && !hasTab(src, s, e))) {
+        const raw = src.slice(s, e);
+        src = raw.includes('\t') ? raw.replace(/\t/g, ' ').trim() : raw.trim();
+        s = 0;
+        e = src.length;
+      }
+      slot.src = src;
+      slot.end = e;
+      slot.start = s;
+      if (s === e) { slot.t = BLANK; return; }
+      const c0 = src.charCodeAt(s);
+      for (const p of labels) if (p.length <= e - s && (p === '' || p.charCodeAt(0) === c0) && src.startsWith(p, s)) { slot.t = FIXED; return; }
+      if (src.charCodeAt(s) === numberLetter) {
+        let i = s + 1;
+        while (i < e && isDigit(src.charCodeAt(i))) i++;
+        if (i > s + 1 && i < e && src.charCodeAt(i) === 32) slot.start = s = i + 1;
+      }
+      const c = src.charCodeAt(s);
+      if ((c < 128 ? fixedFirst[c] === 1 : fixedNonAscii) && fixedKeys.has(fixedKey(src, s, e)) && fixed.has(src.slice(s, e))) { slot.t = FIXED; return; }
+      if (c === 71 /* G */ || c === 77 /* M */) { block(src, s, e, slot); return; }
+      if (isRecord(src, s, e)) { slot.t = RECORD; slot.uuid = src.slice(s + recPre.length, s + recPre.length + 36).toLowerCase(); return; }
+      const line = src.slice(s, e);
+      if (grammar.protectedCheck.test(line)) { slot.t = PROTECTED_CHECK; return; }
+      if (grammar.touchCheck?.test(line)) { slot.t = TOUCH_CHECK; return; }
       if (line.startsWith(open) && line.endsWith(close)) {
         const inner = line.slice(open.length, line.length - close.length);
-        if (!inner.includes(open) && !inner.includes(close)) return { t: 'comment', text: inner };
+        if (!inner.includes(open) && !inner.includes(close)) { slot.t = COMMENT; return; }
       }
-      return block(line);
+      block(src, s, e, slot);
     },
   };
-
-  function block(line: string): ReadLine {
-      const codes: string[] = [];
-      const w: Record<string, number> = {};
-      const unknown: string[] = [];
-      for (const tok of line.split(' ')) {
-        if (tok === '') continue;
-        const letter = tok[0] as string;
-        const value = numberOf(tok);
-        if (value === null) { unknown.push(tok); continue; }
-        if (letter === 'G' || letter === 'M') {
-          const code = `${letter}${value}`;
-          if (known.has(code) || known.has(tok)) codes.push(known.has(tok) ? tok : code);
-          else unknown.push(tok);
-        } else if (axisWords.has(letter) || letter === 'F') {
-          w[letter] = value;
-        } else if (known.has(tok)) {
-          codes.push(tok);
-        } else {
-          unknown.push(tok);
-        }
-      }
-      if (codes.length === 0 && Object.keys(w).length === 0) return { t: 'unknown', text: line };
-      return { t: 'block', codes, words: w, unknown };
-  }
 }

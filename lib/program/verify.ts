@@ -20,7 +20,7 @@ import type { Feature, Part, Probe } from '../features/schema';
 import type { Machine } from '../kinematics/schema';
 import type { Plan, TouchPoint } from './plan-schema';
 import type { ReadyPost } from '../../postprocessors/index';
-import { makeReader, type ReadLine } from './verify-read';
+import { BLOCK, COMMENT, FEED, makeReader, PROTECTED, PROTECTED_CHECK, RAPID, ReadSlot, RECORD, SKIP, TOUCH, TOUCH_CHECK, UNKNOWN, type Reader } from './verify-read';
 import { CAUTION_PHRASES } from './view-model';
 
 export interface Finding { line: number; code: string; severity: 'error' | 'warning'; message: string }
@@ -37,103 +37,166 @@ interface Frame { o: Vec3; x: Vec3; y: Vec3; z: Vec3; axis: Vec3; safe: number }
 
 type Kind = 'rapid' | 'feed' | 'protected' | 'touch';
 type Phase = 'free' | 'afterFast' | 'afterBackoff' | 'afterSlow' | 'afterRecord';
+type Add = (l: number, c: string, m: string, s?: Finding['severity']) => void;
 
 interface Ctx {
   pm: PreparedMachine; part: Part; probe: Probe; r: number; zTop: number;
   features: Map<string, { f: Feature; frame: FeatureFrame; clearance: number; top: Vec3 }>;
   points: Map<string, TouchPoint>;
-  safe: Map<string, number>;
   clearances: Map<string, number>;
-  /** Replay frames by rotary setting (see partPose). */
+  /** Replay frames by rotary setting (see frameAt). */
   frames: Map<string, Frame>;
   findings: Finding[];
 }
 
 const fmt = (p: Vec3) => `[${p.map((v) => v.toFixed(3)).join(', ')}]`;
 
+/** The program's lines, read in place: line i is text[start(i), end(i)). */
+class Lines {
+  readonly count: number;
+  /** Where each line starts, and one past the end of the text + 1. */
+  private readonly starts: number[] = [0];
+  constructor(readonly text: string, readonly reader: Reader) {
+    for (let p = text.indexOf('\n'); p !== -1; p = text.indexOf('\n', p + 1)) this.starts.push(p + 1);
+    this.count = this.starts.length;
+    this.starts.push(text.length + 1);
+  }
+  start(i: number): number { return this.starts[i]!; }
+  end(i: number): number { return this.starts[i + 1]! - 1; }
+  /** Reads line i into slot (past the last line: a blank line). */
+  read(i: number, slot: ReadSlot): ReadSlot {
+    if (i >= this.count) this.reader.read('', 0, 0, slot);
+    else this.reader.read(this.text, this.starts[i]!, this.starts[i + 1]! - 1, slot);
+    return slot;
+  }
+}
+
 export function verifyProgram(input: VerifyInput, post: ReadyPost): VerifyResult {
   const pm = prepareMachine(input.machine);
   const rotaryNames = pm.rotaries.map((r) => r.name).sort();
   const reader = makeReader(post.bundle.definition, post.bundle.grammar, rotaryNames, (input.part.number ?? 'program').replace(/[^A-Za-z0-9-]/g, ''));
-  const raw = input.program.split('\n');
-  // parsed lazily (the current line and the next), so a 100,000-line program keeps no parse tree
-  const cache = new Map<number, ReadLine>();
-  const line = (i: number): ReadLine => {
-    let v = cache.get(i);
-    if (!v) {
-      v = reader.read(raw[i] ?? '');
-      cache.set(i, v);
-      if (cache.size > 3) cache.delete(cache.keys().next().value as number);
-    }
-    return v;
-  };
-  const lines: Lines = { count: raw.length, at: line, recordAt: (i) => (raw[i]?.includes('TRIP') ? line(i) : null) };
+  const lines = new Lines(input.program, reader);
   const clearances = partClearances(input.part, input.probe);
   const ctx: Ctx = {
     pm, part: input.part, probe: input.probe, r: probeRadius(input.probe), zTop: pm.machine.linear.Z[1],
     features: new Map(input.part.features.map((f) => [f.uuid, { f, frame: featureFrame(f), clearance: clearances.get(f.uuid) ?? input.probe.clearance, top: featureTop(f) }])),
     points: new Map(input.plan.touchPoints.map((tp) => [tp.uuid.toLowerCase(), tp])),
-    safe: new Map(), clearances, frames: new Map(), findings: [],
+    clearances, frames: new Map(), findings: [],
   };
-  const add = (line: number, code: string, message: string, severity: Finding['severity'] = 'error') => ctx.findings.push({ line, code, severity, message });
-  checkHeader(lines, raw, post, add);
+  const add: Add = (line, code, message, severity = 'error') => ctx.findings.push({ line, code, severity, message });
+  checkHeader(lines, post, add);
   replay(lines, ctx, post, add);
   return { ok: !ctx.findings.some((f) => f.severity === 'error'), findings: ctx.findings };
 }
 
-interface Lines { count: number; at: (i: number) => ReadLine; recordAt: (i: number) => ReadLine | null }
-
-function checkHeader(lines: Lines, rawLines: string[], post: ReadyPost, add: (l: number, c: string, m: string, s?: Finding['severity']) => void) {
+function checkHeader(lines: Lines, post: ReadyPost, add: Add) {
   const texts: string[] = [];
+  const slot = new ReadSlot(lines.reader.words.length);
   for (let i = 0; i < lines.count; i++) {
-    const l = lines.at(i);
-    if (l.t === 'block') break;
-    if (l.t === 'comment') texts.push(l.text);
+    lines.read(i, slot);
+    if (slot.t === BLOCK) break;
+    if (slot.t === COMMENT) texts.push(lines.reader.commentText(slot));
   }
   const head = texts.join(' ').toUpperCase().replace(/\s+/g, ' ');
   const missing = CAUTION_PHRASES.filter((p) => !head.includes(p));
   if (missing.length > 0) add(1, 'CAUTION_MISSING', `the safety caution is missing or incomplete before the first move (not found: ${missing.join(', ')})`);
-  for (const s of post.bundle.definition.safeStart) if (!rawLines.some((l) => l.trim().endsWith(s))) add(1, 'SAFE_START_MISSING', `the modal set-up line "${s}" is missing`, 'warning');
+  for (const s of post.bundle.definition.safeStart) if (!someLineEndsWith(lines, s)) add(1, 'SAFE_START_MISSING', `the modal set-up line "${s}" is missing`, 'warning');
 }
 
-/** For each line, the uuid of the next record (what it works toward) and of the last one (what it leaves). */
-function contextUuids(lines: Lines): { next: (string | null)[]; prev: (string | null)[] } {
-  const records: (string | null)[] = new Array(lines.count).fill(null);
+/** Whether some line, trimmed, ends with s. */
+function someLineEndsWith(lines: Lines, s: string): boolean {
+  const text = lines.text;
   for (let i = 0; i < lines.count; i++) {
-    const l = lines.recordAt(i);
-    if (l?.t === 'record') records[i] = l.uuid;
+    const a = lines.start(i);
+    const e = lines.end(i);
+    const c = text.charCodeAt(e - 1);
+    // a line without white space at its ends is its own trim
+    if (e > a && c > 32 && c < 127 && text.charCodeAt(a) > 32 && text.charCodeAt(a) < 127) {
+      if (e - s.length >= a && text.startsWith(s, e - s.length)) return true;
+    } else if (text.slice(a, e).trim().endsWith(s)) return true;
   }
-  const next: (string | null)[] = new Array(lines.count).fill(null);
-  const prev: (string | null)[] = new Array(lines.count).fill(null);
-  let n: string | null = null;
-  for (let i = lines.count - 1; i >= 0; i--) {
-    n = records[i] ?? n;
-    next[i] = n;
-  }
-  let p: string | null = null;
-  for (let i = 0; i < lines.count; i++) {
-    prev[i] = p;
-    p = records[i] ?? p;
-  }
-  return { next, prev };
+  return false;
 }
 
-function classify(l: Extract<ReadLine, { t: 'block' }>, nextLine: ReadLine | undefined, post: ReadyPost): Kind | null {
-  const g = post.bundle.grammar;
-  for (const c of l.codes) {
-    if (c === 'G0') return 'rapid';
-    if (c === 'G1') return 'feed';
-    if (g.protectedCodes.includes(c)) return 'protected';
-    if (g.touchCodes.includes(c)) return 'touch';
-    if (g.skipCodes.includes(c)) return nextLine?.t === 'touchCheck' ? 'touch' : 'protected';
+/**
+ * The trip records that give lines their context (lines holding TRIP that read as records):
+ * line numbers in order, uuids and touch points. A line works toward the next record (at or
+ * after it) and leaves the last one before it.
+ */
+interface Records { at: number[]; uuid: string[]; tp: (TouchPoint | null)[] }
+
+function contextRecords(lines: Lines, ctx: Ctx): Records {
+  const out: Records = { at: [], uuid: [], tp: [] };
+  const slot = new ReadSlot(lines.reader.words.length);
+  const text = lines.text;
+  let i = 0;
+  for (let p = text.indexOf('TRIP'); p !== -1 && i < lines.count; p = text.indexOf('TRIP', lines.start(i))) {
+    while (lines.end(i) < p + 4) i++;
+    if (lines.read(i, slot).t === RECORD) { out.at.push(i); out.uuid.push(slot.uuid); out.tp.push(ctx.points.get(slot.uuid) ?? null); }
+    i++;
+  }
+  return out;
+}
+
+const G90 = 1;
+const G91 = 2;
+
+/** The move kind a block's codes give (the first motion code decides), or null. */
+function classify(l: ReadSlot, next: ReadSlot, reader: Reader): Kind | null {
+  for (let k = 0; k < l.nCodes; k++) {
+    const c = reader.codeKind[l.codes[k]!];
+    if (c === RAPID) return 'rapid';
+    if (c === FEED) return 'feed';
+    if (c === PROTECTED) return 'protected';
+    if (c === TOUCH) return 'touch';
+    if (c === SKIP) return next.t === TOUCH_CHECK ? 'touch' : 'protected';
   }
   return null;
 }
 
-function replay(lines: Lines, ctx: Ctx, post: ReadyPost, add: (l: number, c: string, m: string, s?: Finding['severity']) => void) {
-  const ctxUuid = contextUuids(lines);
-  const measured = new Set<string>();
-  const pos: AxisValues = {};
+/**
+ * Machine axis state during replay, by word index (X, Y, Z, then the rotaries as the reader
+ * orders them); `has` bit i set once word i has a value. `obj` gives it as AxisValues.
+ */
+class Axes {
+  readonly v: Float64Array;
+  has = 0;
+  constructor(readonly names: string[]) { this.v = new Float64Array(names.length); }
+  copyFrom(o: Axes) { this.v.set(o.v); this.has = o.has; }
+  obj(): AxisValues {
+    const out: AxisValues = {};
+    for (let k = 0; k < this.names.length; k++) if (this.has & (1 << k)) out[this.names[k]!] = this.v[k]!;
+    return out;
+  }
+}
+
+function replay(lines: Lines, ctx: Ctx, post: ReadyPost, add: Add) {
+  const reader = lines.reader;
+  const names = reader.words.filter((_, k) => k !== reader.feed);
+  const nW = names.length;
+  const XYZ = 0b111;
+  const rot = ctx.pm.rotaries.map((r) => names.indexOf(r.name));
+  let rotMask = 0;
+  for (const k of rot) if (k >= 0) rotMask |= 1 << k;
+  const axisMask = (1 << nW) - 1;
+  const modeOf = new Uint8Array(reader.codes.map((c) => (c === 'G90' ? G90 : c === 'G91' ? G91 : 0)));
+  const limits = linearLimits(ctx);
+  const records = contextRecords(lines, ctx);
+  const nRec = records.at.length;
+  let rec = 0;
+  let readRec = 0;
+  /** Reads line j (in order) into slot; a context record is already read. */
+  const readLine = (j: number, slot: ReadSlot) => {
+    while (readRec < nRec && records.at[readRec]! < j) readRec++;
+    if (readRec < nRec && records.at[readRec] === j) { slot.t = RECORD; slot.uuid = records.uuid[readRec]!; }
+    else lines.read(j, slot);
+  };
+  const measured = new Set<TouchPoint>();
+  const pos = new Axes(names);
+  const from = new Axes(names);
+  const frames = new FrameCache(ctx, rot);
+  const trips = new TripCache(ctx, pos, rot);
+  const probing = new ProbingLines();
   let incremental = false;
   let modal: Kind | null = null;
   let phase: Phase = 'free';
@@ -141,124 +204,207 @@ function replay(lines: Lines, ctx: Ctx, post: ReadyPost, add: (l: number, c: str
   const needsCheck = post.bundle.grammar.touchCheck !== null;
   let frame: Frame | null = null;
   let lastPose: Pose | null = null;
+  let l = new ReadSlot(reader.words.length);
+  let next = new ReadSlot(reader.words.length);
+  readLine(0, next);
   for (let i = 0; i < lines.count; i++) {
-    const l = lines.at(i);
+    const t = l;
+    l = next;
+    next = t;
+    readLine(i + 1, next);
     const ln = i + 1;
-    if (l.t === 'unknown') { add(ln, 'UNKNOWN_WORD', `"${l.text.slice(0, 60)}" is not a statement the ${post.bundle.definition.id} post writes`); continue; }
-    if (l.t === 'record') {
-      const tp = ctx.points.get(l.uuid);
+    while (rec < nRec && records.at[rec]! < i) rec++;
+    if (l.t === UNKNOWN) { add(ln, 'UNKNOWN_WORD', `"${l.text().slice(0, 60)}" is not a statement the ${post.bundle.definition.id} post writes`); continue; }
+    if (l.t === RECORD) {
+      const tp = rec < nRec && records.at[rec] === i ? records.tp[rec]! : ctx.points.get(l.uuid) ?? null;
       if (!tp) add(ln, 'UNKNOWN_POINT', `record for ${l.uuid}, which is not a touch point of the plan`);
-      else if (measured.has(l.uuid)) add(ln, 'POINT_MEASURED_TWICE', `touch point ${l.uuid} is recorded again`, 'warning');
+      else if (measured.has(tp)) add(ln, 'POINT_MEASURED_TWICE', `touch point ${l.uuid} is recorded again`, 'warning');
       if (phase !== 'afterSlow') add(ln, 'RECORD_MISSING', `record of ${l.uuid} without a measuring touch just before it`);
-      measured.add(l.uuid);
+      if (tp) measured.add(tp);
       phase = 'afterRecord';
       continue;
     }
-    if (l.t !== 'block') continue;
+    if (l.t !== BLOCK) continue;
     if (l.unknown.length > 0) add(ln, 'UNKNOWN_WORD', `unknown word(s) ${l.unknown.join(' ')} for the ${post.bundle.definition.id} post`);
-    if (l.codes.includes('G91')) incremental = true;
-    if (l.codes.includes('G90')) incremental = false;
-    const kind: Kind | null = classify(l, lines.at(i + 1), post) ?? modal;
+    let modes = 0;
+    for (let k = 0; k < l.nCodes; k++) modes |= modeOf[l.codes[k]!]!;
+    if (modes & G91) incremental = true;
+    if (modes & G90) incremental = false;
+    const kind: Kind | null = classify(l, next, reader) ?? modal;
     if (kind && kind !== 'touch' && kind !== 'protected') modal = kind;
-    let nAxis = 0;
-    let linearWord = false;
-    for (const w in l.words) if (w !== 'F') { nAxis++; if (w === 'X' || w === 'Y' || w === 'Z') linearWord = true; }
-    if (nAxis === 0 || kind === null) continue;
-    const hasRot = rotaryWords(l.words, ctx);
-    const fromZ = pos.Z;
-    const from: AxisValues | null = hasRot || !lastPose ? { ...pos } : null;
-    const known = 'X' in pos && 'Y' in pos && 'Z' in pos;
-    for (const w in l.words) if (w !== 'F') pos[w] = incremental ? (pos[w] ?? 0) + l.words[w]! : l.words[w]!;
-    checkLimits(ctx, pos, ln, add);
-    const rotaryMoved = from !== null && hasRot && ctx.pm.rotaries.some((r) => r.name in l.words && Math.abs((from[r.name] ?? 0) - pos[r.name]!) > 1e-9);
+    const words = l.mask & axisMask;
+    if (words === 0 || kind === null) continue;
+    const linearWord = (words & XYZ) !== 0;
+    const hasRot = (words & rotMask) !== 0;
+    const fromZ = pos.has & 4 ? pos.v[2] : undefined;
+    const fromCopied = hasRot || !lastPose;
+    if (fromCopied) from.copyFrom(pos);
+    const known = (pos.has & XYZ) === XYZ;
+    for (let k = 0; k < nW; k++) {
+      if (words & (1 << k)) pos.v[k] = incremental ? pos.v[k]! + l.values[k]! : l.values[k]!;
+    }
+    pos.has |= words;
+    checkLimits(ctx, pos, limits, rot, ln, add);
+    let rotaryMoved = false;
+    if (fromCopied && hasRot) {
+      for (const k of rot) if (k >= 0 && words & (1 << k) && Math.abs(from.v[k]! - pos.v[k]!) > 1e-9) { rotaryMoved = true; break; }
+    }
     if (rotaryMoved && ((fromZ ?? -Infinity) < ctx.zTop - Z_TOP_TOL_MM || linearWord)) {
       add(ln, 'ROTARY_BELOW_CLEARANCE', `rotary move with Z at ${(fromZ ?? NaN).toFixed(3)} or together with a linear move; rotaries may move only alone with Z at the top of its travel (${ctx.zTop})`);
     }
-    if ((kind === 'protected' || kind === 'touch') && !checkFollows(lines.at(i + 1), kind, needsCheck, post)) {
+    if ((kind === 'protected' || kind === 'touch') && !checkFollows(next, kind, needsCheck, post)) {
       add(ln, 'CHECK_MISSING', kind === 'protected' ? 'protected move without the unexpected-trigger check after it' : 'touch without the no-trigger check after it');
     }
     if (!known) continue;
-    if (!frame || hasRot) frame = frameAt(ctx, pos);
-    const a = lastPose && !rotaryMoved ? lastPose : poseIn(frameAt(ctx, from ?? pos), from ?? pos);
-    const b = poseIn(frame, pos);
+    if (!frame || hasRot) frame = frames.at(pos);
+    const a = lastPose && !rotaryMoved ? lastPose : poseIn(frames.at(from), from.v);
+    const b = poseIn(frame, pos.v);
     lastPose = b;
-    const tp = ctx.points.get(ctxUuid.next[i] ?? '') ?? null;
-    const left = ctx.points.get(ctxUuid.prev[i] ?? '') ?? null;
+    const tp = rec < nRec ? records.tp[rec]! : null;
+    const left = rec > 0 ? records.tp[rec - 1]! : null;
     if (kind === 'touch') {
       phase = measureMove(ctx, phase, tp, a.tip, b.tip, ln, add);
       lastTouch = tp;
       // replay the trip at nominal contact (the stylus stops at the surface, not at `end`)
-      if (tp && onProbingLine(tp, b.tip, tp.end)) {
-        Object.assign(pos, linearAxesFor(ctx.pm, tp.target, pos));
+      if (tp && probing.holds(tp, b.tip, true)) {
+        trips.moveTo(tp);
         lastPose = null;
       }
       continue;
     }
     if (phase !== 'free') {
-      phase = afterTouch(ctx, phase, lastTouch, kind, incremental, b.tip, ln, add);
+      phase = afterTouch(phase, kind, incremental, lastTouch !== null && probing.holds(lastTouch, b.tip, false), ln, add);
       if (phase === 'free' || phase === 'afterBackoff') continue;
     }
-    checkPath(ctx, kind, fromZ, pos.Z, a, b, frame.safe, [tp, left], ln, add);
+    checkPath(ctx, kind, fromZ, pos.v[2]!, a, b, frame.safe, tp, left, ln, add);
   }
   for (const tp of ctx.points.values()) {
-    if (!measured.has(tp.uuid.toLowerCase())) add(lines.count, 'POINT_NOT_MEASURED', `touch point ${tp.seq} (${tp.uuid}) of the plan is never measured`);
+    if (!measured.has(tp)) add(lines.count, 'POINT_NOT_MEASURED', `touch point ${tp.seq} (${tp.uuid}) of the plan is never measured`);
   }
 }
 
-const rotaryWords = (w: Record<string, number>, ctx: Ctx): boolean => ctx.pm.rotaries.some((r) => r.name in w);
+/**
+ * The trip replayed at nominal contact: linear axes that put the tip on tp's target at the
+ * current rotaries (remembered for the last point, as its two touches share them).
+ */
+class TripCache {
+  private tp: TouchPoint | null = null;
+  private readonly at: Float64Array;
+  private readonly xyz = new Float64Array(3);
+  constructor(private readonly ctx: Ctx, private readonly pos: Axes, private readonly rot: number[]) { this.at = new Float64Array(rot.length); }
+  moveTo(tp: TouchPoint) {
+    const { pos, rot, at } = this;
+    let same = this.tp === tp;
+    for (let j = 0; j < rot.length && same; j++) same = Object.is(rotaryAngle(pos, rot[j]!), at[j]);
+    if (!same) {
+      const xyz = linearAxesFor(this.ctx.pm, tp.target, pos.obj());
+      this.xyz[0] = xyz.X;
+      this.xyz[1] = xyz.Y;
+      this.xyz[2] = xyz.Z;
+      this.tp = tp;
+      for (let j = 0; j < rot.length; j++) at[j] = rotaryAngle(pos, rot[j]!);
+    }
+    pos.v.set(this.xyz);
+  }
+}
 
-function checkFollows(next: ReadLine | undefined, kind: 'protected' | 'touch', needsTouchCheck: boolean, post: ReadyPost): boolean {
-  if (kind === 'protected') return next?.t === 'protectedCheck';
+/** A rotary's value in axes (missing = 0). */
+const rotaryAngle = (axes: Axes, k: number): number => (k >= 0 && axes.has & (1 << k) ? axes.v[k]! : 0);
+
+function checkFollows(next: ReadSlot, kind: 'protected' | 'touch', needsTouchCheck: boolean, post: ReadyPost): boolean {
+  if (kind === 'protected') return next.t === PROTECTED_CHECK;
   if (!needsTouchCheck) return true;
-  return next?.t === 'touchCheck' || post.bundle.grammar.touchCheck === null;
+  return next.t === TOUCH_CHECK || post.bundle.grammar.touchCheck === null;
 }
 
-function checkLimits(ctx: Ctx, pos: AxisValues, ln: number, add: (l: number, c: string, m: string) => void) {
-  for (const w of ['X', 'Y', 'Z'] as const) {
-    const v = pos[w];
-    const [lo, hi] = ctx.pm.machine.linear[w];
-    if (v !== undefined && (v < lo - 1e-6 || v > hi + 1e-6)) add(ln, 'AXIS_LIMIT', `${w}${v.toFixed(3)} is outside its travel ${lo} to ${hi} mm`);
+interface Limits { lo: number[]; hi: number[] }
+const linearLimits = (ctx: Ctx): Limits => {
+  const lin = ctx.pm.machine.linear;
+  return { lo: [lin.X[0], lin.Y[0], lin.Z[0]], hi: [lin.X[1], lin.Y[1], lin.Z[1]] };
+};
+
+function checkLimits(ctx: Ctx, pos: Axes, lim: Limits, rot: number[], ln: number, add: Add) {
+  for (let k = 0; k < 3; k++) {
+    const v = pos.v[k]!;
+    if (pos.has & (1 << k) && (v < lim.lo[k]! - 1e-6 || v > lim.hi[k]! + 1e-6)) add(ln, 'AXIS_LIMIT', `${pos.names[k]}${v.toFixed(3)} is outside its travel ${lim.lo[k]} to ${lim.hi[k]} mm`);
   }
-  for (const r of ctx.pm.rotaries) {
-    const v = pos[r.name];
-    if (v !== undefined && r.min !== null && r.max !== null && (v < r.min - 1e-6 || v > r.max + 1e-6)) add(ln, 'AXIS_LIMIT', `${r.name}${v.toFixed(3)} is outside its travel ${r.min} to ${r.max}°`);
-  }
+  ctx.pm.rotaries.forEach((r, j) => {
+    const k = rot[j]!;
+    const v = pos.v[k]!;
+    if (k >= 0 && pos.has & (1 << k) && r.min !== null && r.max !== null && (v < r.min - 1e-6 || v > r.max + 1e-6)) add(ln, 'AXIS_LIMIT', `${r.name}${v.toFixed(3)} is outside its travel ${r.min} to ${r.max}°`);
+  });
 }
 
 /**
  * Forward kinematics for replay: at fixed rotary angles fk is affine in X, Y, Z, so the
  * map is built once per rotary setting (from fk itself) and applied per line.
  */
-function frameAt(ctx: Ctx, axes: AxisValues): Frame {
-  let key = '';
-  for (const r of ctx.pm.rotaries) key += `${axes[r.name] ?? 0},`;
-  let m = ctx.frames.get(key);
-  if (!m) {
-    const base = forwardKinematics(ctx.pm, { ...axes, X: 0, Y: 0, Z: 0 });
-    const col = (k: 'X' | 'Y' | 'Z') => sub(forwardKinematics(ctx.pm, { ...axes, X: 0, Y: 0, Z: 0, [k]: 1 }).tip, base.tip);
-    m = { o: base.tip, x: col('X'), y: col('Y'), z: col('Z'), axis: base.axis, safe: safeHeight(ctx.part, ctx.probe, base.axis, ctx.clearances) };
-    ctx.frames.set(key, m);
+class FrameCache {
+  private last: Frame | null = null;
+  private readonly lastAt: Float64Array;
+  constructor(private readonly ctx: Ctx, private readonly rot: number[]) { this.lastAt = new Float64Array(rot.length); }
+  /** The frame at the axes' rotary values (a missing rotary is at 0). */
+  at(axes: Axes): Frame {
+    const { rot, lastAt } = this;
+    let same = this.last !== null;
+    for (let j = 0; j < rot.length && same; j++) {
+      const v = rotaryAngle(axes, rot[j]!);
+      // same key text as before: equal numbers (0 and -0 both print 0), or NaN again
+      same = v === lastAt[j] || (v !== v && lastAt[j] !== lastAt[j]);
+    }
+    if (same) return this.last!;
+    let key = '';
+    for (let j = 0; j < rot.length; j++) { lastAt[j] = rotaryAngle(axes, rot[j]!); key += `${lastAt[j]},`; }
+    const ctx = this.ctx;
+    let m = ctx.frames.get(key);
+    if (!m) {
+      const at = axes.obj();
+      const base = forwardKinematics(ctx.pm, { ...at, X: 0, Y: 0, Z: 0 });
+      const col = (k: 'X' | 'Y' | 'Z') => sub(forwardKinematics(ctx.pm, { ...at, X: 0, Y: 0, Z: 0, [k]: 1 }).tip, base.tip);
+      m = { o: base.tip, x: col('X'), y: col('Y'), z: col('Z'), axis: base.axis, safe: safeHeight(ctx.part, ctx.probe, base.axis, ctx.clearances) };
+      ctx.frames.set(key, m);
+    }
+    this.last = m;
+    return m;
   }
-  return m;
 }
 
-function poseIn(m: Frame, axes: AxisValues): Pose {
-  const X = axes.X ?? 0;
-  const Y = axes.Y ?? 0;
-  const Z = axes.Z ?? 0;
+/** Tip and tool axis in the part frame at axes X, Y, Z (v[0..2], missing = 0). */
+function poseIn(m: Frame, v: Float64Array): Pose {
+  const X = v[0]!;
+  const Y = v[1]!;
+  const Z = v[2]!;
   return {
     tip: [m.o[0] + m.x[0] * X + m.y[0] * Y + m.z[0] * Z, m.o[1] + m.x[1] * X + m.y[1] * Y + m.z[1] * Z, m.o[2] + m.x[2] * X + m.y[2] * Y + m.z[2] * Z],
     axis: m.axis,
   };
 }
 
-function measureMove(ctx: Ctx, phase: Phase, tp: TouchPoint | null, a: Vec3, b: Vec3, ln: number, add: (l: number, c: string, m: string) => void): Phase {
+/**
+ * Math.hypot(x, y, z) against a limit, decided from the sum of squares where that is far from
+ * the limit (1e-9 relative, against a rounding error of a few 1e-16): -1 below, 1 above, 0 when
+ * only the hypot itself can tell.
+ */
+function hypotSide(x: number, y: number, z: number, limit: number): number {
+  const l2 = limit * limit;
+  if (!(l2 > 1e-290 && l2 < Infinity && limit > 0)) return 0;
+  const q = x * x + y * y + z * z;
+  return q < l2 * (1 - 1e-9) ? -1 : q > l2 * (1 + 1e-9) ? 1 : 0;
+}
+
+/** distance(a, b) > limit. */
+function farther(a: Vec3, b: Vec3, limit: number): boolean {
+  const side = hypotSide(a[0] - b[0], a[1] - b[1], a[2] - b[2], limit);
+  return side === 0 ? distance(a, b) > limit : side > 0;
+}
+
+function measureMove(ctx: Ctx, phase: Phase, tp: TouchPoint | null, a: Vec3, b: Vec3, ln: number, add: Add): Phase {
   if (!tp) { add(ln, 'UNKNOWN_POINT', 'a touch with no touch-point record after it'); return 'afterFast'; }
   const limit = ctx.probe.approach + ctx.probe.overtravel + PLAN_TOL_MM;
-  if (distance(b, tp.end) > PLAN_TOL_MM) add(ln, 'MEASURE_OFF_PLAN', `touch ends at ${fmt(b)}, ${distance(b, tp.end).toFixed(3)} mm from the plan's end ${fmt(tp.end)} of touch point ${tp.seq}`);
-  if (distance(a, b) > limit) add(ln, 'MEASURE_TOO_LONG', `touch is ${distance(a, b).toFixed(3)} mm long, more than approach + overtravel (${(limit - PLAN_TOL_MM).toFixed(3)} mm)`);
+  if (farther(b, tp.end, PLAN_TOL_MM)) add(ln, 'MEASURE_OFF_PLAN', `touch ends at ${fmt(b)}, ${distance(b, tp.end).toFixed(3)} mm from the plan's end ${fmt(tp.end)} of touch point ${tp.seq}`);
+  if (farther(a, b, limit)) add(ln, 'MEASURE_TOO_LONG', `touch is ${distance(a, b).toFixed(3)} mm long, more than approach + overtravel (${(limit - PLAN_TOL_MM).toFixed(3)} mm)`);
   if (phase === 'free') {
-    if (distance(a, tp.start) > PLAN_TOL_MM) add(ln, 'MEASURE_OFF_PLAN', `touch starts at ${fmt(a)}, ${distance(a, tp.start).toFixed(3)} mm from the plan's start ${fmt(tp.start)} of touch point ${tp.seq}`);
+    if (farther(a, tp.start, PLAN_TOL_MM)) add(ln, 'MEASURE_OFF_PLAN', `touch starts at ${fmt(a)}, ${distance(a, tp.start).toFixed(3)} mm from the plan's start ${fmt(tp.start)} of touch point ${tp.seq}`);
     return 'afterFast';
   }
   if (phase === 'afterBackoff') return 'afterSlow';
@@ -266,18 +412,35 @@ function measureMove(ctx: Ctx, phase: Phase, tp: TouchPoint | null, a: Vec3, b: 
   return 'afterSlow';
 }
 
-/** Whether p lies on the probing line of a touch point, between `from` (default its target) and its start. */
-function onProbingLine(tp: TouchPoint, p: Vec3, from: Vec3 = tp.target): boolean {
-  const d = sub(tp.start, from);
-  const len = norm(d);
-  const s = dot(sub(p, from), d) / (len * len);
-  const off = norm(cross(sub(p, from), d)) / len;
-  return off <= PLAN_TOL_MM && s >= -PLAN_TOL_MM / len && s <= 1 + PLAN_TOL_MM / len;
+/**
+ * Whether a point lies on the probing line of a touch point, between `from` (its end, or its
+ * target) and its start. The line of the last point asked about is kept, per `from`.
+ */
+class ProbingLines {
+  private readonly tp: (TouchPoint | null)[] = [null, null];
+  private readonly d: Vec3[] = [[0, 0, 0], [0, 0, 0]];
+  private readonly len = [0, 0];
+  holds(tp: TouchPoint, p: Vec3, fromEnd: boolean): boolean {
+    const k = fromEnd ? 1 : 0;
+    const from = fromEnd ? tp.end : tp.target;
+    if (this.tp[k] !== tp) {
+      this.tp[k] = tp;
+      this.d[k] = sub(tp.start, from);
+      this.len[k] = norm(this.d[k]!);
+    }
+    const d = this.d[k]!;
+    const len = this.len[k]!;
+    const q = sub(p, from);
+    const s = dot(q, d) / (len * len);
+    if (!(s >= -PLAN_TOL_MM / len && s <= 1 + PLAN_TOL_MM / len)) return false;
+    // off the line: |q × d| / len <= PLAN_TOL_MM
+    const c = cross(q, d);
+    const side = len > 0 && len < Infinity ? hypotSide(c[0], c[1], c[2], PLAN_TOL_MM * len) : 0;
+    return side === 0 ? norm(c) / len <= PLAN_TOL_MM : side < 0;
+  }
 }
 
-function afterTouch(ctx: Ctx, phase: Phase, tp: TouchPoint | null, kind: Kind, incremental: boolean, b: Vec3, ln: number, add: (l: number, c: string, m: string) => void): Phase {
-  void ctx;
-  const away = tp !== null && onProbingLine(tp, b);
+function afterTouch(phase: Phase, kind: Kind, incremental: boolean, away: boolean, ln: number, add: Add): Phase {
   if (phase === 'afterFast') {
     if (kind === 'feed' && incremental && away) return 'afterBackoff';
     add(ln, 'BACKOFF_MISSING', 'after a touch the next move must back off along the probing line');
@@ -290,12 +453,12 @@ function afterTouch(ctx: Ctx, phase: Phase, tp: TouchPoint | null, kind: Kind, i
 }
 
 /** A move below the safe plane must be along the tool axis, inside a bore's or slot's free space, or at an exterior feature's clearance. */
-function checkPath(ctx: Ctx, kind: Kind, fromZ: number | undefined, toZ: number | undefined, a: Pose, b: Pose, safe: number, near: (TouchPoint | null)[], ln: number, add: (l: number, c: string, m: string) => void) {
+function checkPath(ctx: Ctx, kind: Kind, fromZ: number | undefined, toZ: number, a: Pose, b: Pose, safe: number, tp: TouchPoint | null, left: TouchPoint | null, ln: number, add: Add) {
   const t = b.axis;
   const H = safe - SAFE_TOL_MM;
-  const high = (p: Vec3, z: number | undefined) => dot(p, t) >= H || (z ?? -Infinity) >= ctx.zTop - Z_TOP_TOL_MM;
-  const aHigh = high(a.tip, fromZ);
-  const bHigh = high(b.tip, toZ);
+  const zHigh = ctx.zTop - Z_TOP_TOL_MM;
+  const aHigh = dot(a.tip, t) >= H || (fromZ ?? -Infinity) >= zHigh;
+  const bHigh = dot(b.tip, t) >= H || toZ >= zHigh;
   if (aHigh && bHigh) return;
   if (kind === 'rapid') {
     add(ln, 'RAPID_BELOW_CLEARANCE', `rapid move to ${fmt(b.tip)} (part frame) below the safe plane ${(H + SAFE_TOL_MM).toFixed(3)} mm along the tool axis`);
@@ -308,16 +471,16 @@ function checkPath(ctx: Ctx, kind: Kind, fromZ: number | undefined, toZ: number 
   const d = sub(b.tip, a.tip);
   const len = norm(d);
   if (len < 1e-9 || norm(cross(d, t)) <= 1e-3 * len) return;
-  for (const tp of near) {
-    const feat = tp ? ctx.features.get(tp.featureUuid) : undefined;
-    if (!feat) continue;
-    if (isInterior(feat.f)) {
-      if (inFreeSpace(feat.f, feat.frame, a.tip, ctx.r, SAFE_TOL_MM) && inFreeSpace(feat.f, feat.frame, b.tip, ctx.r, SAFE_TOL_MM)) return;
-    } else {
-      const n = featureAxis(feat.f);
-      const hc = dot(feat.top, n) + feat.clearance - SAFE_TOL_MM;
-      if ((aHigh || dot(a.tip, n) >= hc) && (bHigh || dot(b.tip, n) >= hc)) return;
-    }
-  }
+  if (clearOfPart(ctx, tp, a.tip, b.tip, aHigh, bHigh) || clearOfPart(ctx, left, a.tip, b.tip, aHigh, bHigh)) return;
   add(ln, 'UNSAFE_PATH', `protected move from ${fmt(a.tip)} to ${fmt(b.tip)} (part frame) crosses near the part below clearance, neither along the tool axis nor inside a bore or slot`);
+}
+
+/** Whether a move a → b stays in the free space of tp's bore or slot, or at its exterior feature's clearance. */
+function clearOfPart(ctx: Ctx, tp: TouchPoint | null, a: Vec3, b: Vec3, aHigh: boolean, bHigh: boolean): boolean {
+  const feat = tp ? ctx.features.get(tp.featureUuid) : undefined;
+  if (!feat) return false;
+  if (isInterior(feat.f)) return inFreeSpace(feat.f, feat.frame, a, ctx.r, SAFE_TOL_MM) && inFreeSpace(feat.f, feat.frame, b, ctx.r, SAFE_TOL_MM);
+  const n = featureAxis(feat.f);
+  const hc = dot(feat.top, n) + feat.clearance - SAFE_TOL_MM;
+  return (aHigh || dot(a, n) >= hc) && (bHigh || dot(b, n) >= hc);
 }
