@@ -17,7 +17,9 @@ import Handlebars from 'handlebars';
 type Node = hbs.AST.Statement;
 type Path = hbs.AST.PathExpression;
 /** Appends a template's output for one context to `out`; returns false to give up. */
-type Emit = (ctx: unknown, root: unknown, out: string[]) => boolean;
+type Emit = (ctx: unknown, root: unknown, out: Out) => boolean;
+/** The output so far (one growing string: cheaper than an array joined at the end). */
+interface Out { s: string }
 
 /** Names Handlebars resolves as helpers before looking in the context (its built-ins). */
 const HELPERS = new Set(['each', 'if', 'unless', 'with', 'log', 'lookup', 'helperMissing', 'blockHelperMissing']);
@@ -65,7 +67,7 @@ function compileNode(node: Node, c: Compiler): Emit | null {
   switch (node.type) {
     case 'ContentStatement': {
       const v = (node as hbs.AST.ContentStatement).value;
-      return (_c, _r, out) => { if (v) out.push(v); return true; };
+      return (_c, _r, out) => { out.s += v; return true; };
     }
     case 'CommentStatement':
       return () => true;
@@ -77,7 +79,7 @@ function compileNode(node: Node, c: Compiler): Emit | null {
       return (ctx, root, out) => {
         const s = text(get(ctx, root));
         if (s === null) return false;
-        if (s) out.push(s);
+        out.s += s;
         return true;
       };
     }
@@ -101,7 +103,7 @@ function compileNode(node: Node, c: Compiler): Emit | null {
       const p = node as hbs.AST.PartialStatement;
       if (p.params.length > 0 || p.hash) return null;
       const indent = p.indent ?? '';
-      const pre: Emit = (_c, _r, out) => { if (indent) out.push(indent); return true; };
+      const pre: Emit = (_c, _r, out) => { out.s += indent; return true; };
       if (p.name.type === 'PathExpression') {
         const e = c.partial((p.name as Path).original);
         return e && ((ctx, root, out) => pre(ctx, root, out) && e(ctx, root, out));
@@ -148,7 +150,7 @@ export function compileDirect(main: string, partials: Record<string, string>): (
   const root = compileBody(Handlebars.parse(main).body, c);
   if (!root || unsupported) return null;
   return (view) => {
-    const out: string[] = [];
-    return root(view, view, out) ? out.join('') : null;
+    const out: Out = { s: '' };
+    return root(view, view, out) ? out.s : null;
   };
 }
