@@ -12,7 +12,7 @@
  */
 import { addScaled, dot, type Vec3 } from '../geometry/vec3';
 import type { Feature, Part, Probe } from './schema';
-import { featureAxis, featureTop, heightAlong, isInterior } from './feature-geometry';
+import { featureAxis, featureFrame, featureTop, heightAlongIn, isInterior } from './feature-geometry';
 import { footprintSources, footprintsOnPlane, type FootprintSources } from './footprints';
 
 export const probeRadius = (probe: Probe): number => (probe.effectiveDiameter ?? probe.stylusDiameter) / 2;
@@ -48,14 +48,24 @@ export function partClearances(part: Part, probe: Probe): Map<string, number> {
  * Height along unit `t` of the safe plane (absolute p·t value): `clearance` above every
  * feature's highest point, and 1 mm above every feature's clearance point.
  */
-export function safeHeight(part: Part, probe: Probe, t: Vec3, clearances: Map<string, number>): number {
-  let h = -Infinity;
-  for (const f of part.features) {
-    h = Math.max(h, heightAlong(f, t) + probe.clearance);
-    const entry = addScaled(featureTop(f), featureAxis(f), clearances.get(f.uuid) ?? probe.clearance);
-    h = Math.max(h, dot(entry, t) + 1);
-  }
-  return Number.isFinite(h) ? h : probe.clearance;
+export const safeHeight = (part: Part, probe: Probe, t: Vec3, clearances: Map<string, number>): number =>
+  safeHeights(part, probe, clearances)(t);
+
+/** `safeHeight` for many tool axes: each feature's frame and clearance point found once. */
+export function safeHeights(part: Part, probe: Probe, clearances: Map<string, number>): (t: Vec3) => number {
+  const prepared = part.features.map((f) => ({
+    f,
+    frame: featureFrame(f),
+    entry: addScaled(featureTop(f), featureAxis(f), clearances.get(f.uuid) ?? probe.clearance),
+  }));
+  return (t) => {
+    let h = -Infinity;
+    for (const { f, frame, entry } of prepared) {
+      h = Math.max(h, heightAlongIn(f, frame, t) + probe.clearance);
+      h = Math.max(h, dot(entry, t) + 1);
+    }
+    return Number.isFinite(h) ? h : probe.clearance;
+  };
 }
 
 /** `p` moved along unit `t` onto the plane p·t = height. */

@@ -91,12 +91,19 @@ function circleContacts(f: Extract<Feature, { type: 'bore' | 'boss' }>, fr: Feat
   const { count, raisedFrom } = decideCount(f, levels.length);
   const start = toRad(f.startAngle ?? 0);
   const contacts: Contact[] = [];
+  const { e1, e2 } = fr;
   levels.forEach((d, k) => {
     const stagger = (k * 2 * Math.PI) / count / levels.length;
+    const level = addScaled(f.center, fr.n, -d);
     for (const a of circleAngles(count, start + stagger)) {
-      const radial = addScaled(addScaled([0, 0, 0], fr.e1, Math.cos(a)), fr.e2, Math.sin(a));
-      const surface = addScaled(addScaled(f.center, fr.n, -d), radial, R);
-      contacts.push({ surface, normal: inside ? [-radial[0], -radial[1], -radial[2]] : radial });
+      const c = Math.cos(a);
+      const s = Math.sin(a);
+      // radial = [0, 0, 0] + e1·cos a + e2·sin a, surface = level + radial·R, as scalars
+      const rx = 0 + e1[0] * c + e2[0] * s;
+      const ry = 0 + e1[1] * c + e2[1] * s;
+      const rz = 0 + e1[2] * c + e2[2] * s;
+      const surface: Vec3 = [level[0] + rx * R, level[1] + ry * R, level[2] + rz * R];
+      contacts.push({ surface, normal: inside ? [-rx, -ry, -rz] : [rx, ry, rz] });
     }
   });
   return { contacts, notes: countNote(f, count, raisedFrom) };

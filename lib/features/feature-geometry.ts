@@ -40,8 +40,10 @@ export function featureTop(f: Feature): Vec3 {
 export const isInterior = (f: Feature): boolean => f.type === 'bore' || f.type === 'slot';
 
 /** The highest nominal point of the feature along unit `t` (max p·t over its solid extent). */
-export function heightAlong(f: Feature, t: Vec3): number {
-  const fr = featureFrame(f);
+export const heightAlong = (f: Feature, t: Vec3): number => heightAlongIn(f, featureFrame(f), t);
+
+/** `heightAlong` with the feature's frame (`featureFrame(f)`) given, for many directions. */
+export function heightAlongIn(f: Feature, fr: FeatureFrame, t: Vec3): number {
   const side = (v: Vec3) => Math.abs(dot(v, t));
   switch (f.type) {
     case 'plane': return dot(f.origin, t) + (f.size[0] / 2) * side(fr.e1) + (f.size[1] / 2) * side(fr.e2);

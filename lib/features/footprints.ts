@@ -3,7 +3,7 @@
  * (u along the plane's e1, v along e2, origin at the face centre). A plane's touch
  * points keep out of them; a feature standing on the face also raises its clearance.
  */
-import { dot, sub, type Vec3 } from '../geometry/vec3';
+import { dot, type Vec3 } from '../geometry/vec3';
 import type { Feature, Part } from './schema';
 import { featureAxis, featureFrame } from './feature-geometry';
 import type { Point2 } from './patterns';
@@ -20,13 +20,26 @@ const PARALLEL = 0.9995;
 
 type Standing = Exclude<Feature, { type: 'plane' | 'sphere' }>;
 
-/** The features that can leave a footprint on a face (all but planes and spheres), with their axes: prepare once per part. */
-export interface FootprintSources { items: { f: Standing; n: Vec3 }[] }
+/**
+ * The features that can leave a footprint on a face (all but planes and spheres), with
+ * their axes, and their positions in `items` grouped by axis (the very same numbers),
+ * so a face tests each distinct axis once: prepare once per part.
+ */
+export interface FootprintSources { items: { f: Standing; n: Vec3 }[]; byAxis: { n: Vec3; at: number[] }[] }
 
 export function footprintSources(part: Part): FootprintSources {
   const items: { f: Standing; n: Vec3 }[] = [];
-  for (const f of part.features) if (f.type !== 'plane' && f.type !== 'sphere') items.push({ f, n: featureAxis(f) });
-  return { items };
+  const groups = new Map<string, { n: Vec3; at: number[] }>();
+  for (const f of part.features) {
+    if (f.type === 'plane' || f.type === 'sphere') continue;
+    const n = featureAxis(f);
+    const key = `${n[0]},${n[1]},${n[2]}`;
+    const g = groups.get(key) ?? { n, at: [] };
+    g.at.push(items.length);
+    groups.set(key, g);
+    items.push({ f, n });
+  }
+  return { items, byAxis: [...groups.values()] };
 }
 
 /** Features whose opening or base lies on the plane, with keep-out of the ball radius + 1 mm. */
@@ -34,16 +47,25 @@ export function footprintsOnPlane(plane: Extract<Feature, { type: 'plane' }>, so
   const fr = featureFrame(plane);
   const keep = ballRadius + 1;
   const out: Footprint[] = [];
-  for (const { f, n } of sources.items) {
-    if (dot(n, fr.n) < PARALLEL) continue;
+  // the sources about parallel axes, in their order in `items`
+  const parallel = sources.byAxis.filter((g) => !(dot(g.n, fr.n) < PARALLEL));
+  const at = parallel.length === 1 ? parallel[0]!.at : parallel.flatMap((g) => g.at).sort((a, b) => a - b);
+  const [nx, ny, nz] = fr.n;
+  const [ox, oy, oz] = plane.origin;
+  for (const i of at) {
+    const { f } = sources.items[i]!;
     const height = f.type === 'boss' ? f.height : f.type === 'web' ? f.depth : 0;
-    const base = sub(f.center, [fr.n[0] * height, fr.n[1] * height, fr.n[2] * height]);
-    const rel: Vec3 = sub(base, plane.origin);
-    if (Math.abs(dot(rel, fr.n)) > ON_FACE_TOL) continue;
-    const c: Point2 = [dot(rel, fr.e1), dot(rel, fr.e2)];
+    // rel = centre − height·n − plane origin, as scalars
+    const rx = f.center[0] - nx * height - ox;
+    const ry = f.center[1] - ny * height - oy;
+    const rz = f.center[2] - nz * height - oz;
+    if (Math.abs(rx * nx + ry * ny + rz * nz) > ON_FACE_TOL) continue;
+    const cu = rx * fr.e1[0] + ry * fr.e1[1] + rz * fr.e1[2];
+    const cv = rx * fr.e2[0] + ry * fr.e2[1] + rz * fr.e2[2];
     // only footprints that can reach the face's rectangle
     const reach = (f.type === 'bore' || f.type === 'boss' ? f.diameter / 2 : Math.hypot(f.width, f.length) / 2) + keep;
-    if (Math.abs(c[0]) > plane.size[0] / 2 + reach || Math.abs(c[1]) > plane.size[1] / 2 + reach) continue;
+    if (Math.abs(cu) > plane.size[0] / 2 + reach || Math.abs(cv) > plane.size[1] / 2 + reach) continue;
+    const c: Point2 = [cu, cv];
     if (f.type === 'bore' || f.type === 'boss') {
       const R = f.diameter / 2 + keep;
       out.push({ height, contains: (p) => (p[0] - c[0]) ** 2 + (p[1] - c[1]) ** 2 <= R * R });

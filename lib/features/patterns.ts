@@ -36,24 +36,38 @@ export function spreadOverRectangle(n: number, hu: number, hv: number, blocked: 
     }
   }
   if (cand.length === 0) return [];
+  // coordinates and distances to the chosen set in scratch arrays (no callback runs from here on)
+  if (spread.u.length < cand.length) spread = { u: new Float64Array(2 * cand.length), v: new Float64Array(2 * cand.length), d: new Float64Array(2 * cand.length) };
+  const { u: us, v: vs, d: dist } = spread;
+  const first = cand[0] as Point2;
+  // the farthest candidate (first of equals within 1e-12) is tracked while distances are updated
+  let best = -1;
+  let bestD = -1;
+  for (let k = 0; k < cand.length; k++) {
+    const p = cand[k] as Point2;
+    us[k] = p[0];
+    vs[k] = p[1];
+    dist[k] = (p[0] - first[0]) ** 2 + (p[1] - first[1]) ** 2;
+    if (dist[k]! > bestD + 1e-12) { bestD = dist[k]!; best = k; }
+  }
   const chosen: Point2[] = [cand[0] as Point2];
-  const dist = cand.map((c) => (c[0] - cand[0]![0]) ** 2 + (c[1] - cand[0]![1]) ** 2);
   while (chosen.length < Math.min(n, cand.length)) {
-    let best = -1;
-    let bestD = -1;
-    for (let k = 0; k < cand.length; k++) {
-      if (dist[k]! > bestD + 1e-12) { bestD = dist[k]!; best = k; }
-    }
     if (bestD <= 0) break;
-    const p = cand[best] as Point2;
-    chosen.push(p);
+    chosen.push(cand[best] as Point2);
+    const u = us[best]!;
+    const v = vs[best]!;
+    best = -1;
+    bestD = -1;
     for (let k = 0; k < cand.length; k++) {
-      const d = (cand[k]![0] - p[0]) ** 2 + (cand[k]![1] - p[1]) ** 2;
+      const d = (us[k]! - u) ** 2 + (vs[k]! - v) ** 2;
       if (d < dist[k]!) dist[k] = d;
+      if (dist[k]! > bestD + 1e-12) { bestD = dist[k]!; best = k; }
     }
   }
   return chosen;
 }
+
+let spread = { u: new Float64Array(256), v: new Float64Array(256), d: new Float64Array(256) };
 
 /** Reorders 2-D points into a nearest-neighbour chain from the first (short travel); `at` is called once per item. */
 export function nearestNeighbourOrder<T>(items: T[], at: (t: T) => Point2): T[] {

@@ -18,7 +18,7 @@ import type { PlanInput } from './plan-input';
 import { characteristicsByFeature } from './counts';
 import { planContacts, type Contact } from './contacts';
 import { featureAxis, geometryKey } from './feature-geometry';
-import { partClearances, probeRadius, safeHeight } from './clearance';
+import { partClearances, probeRadius, safeHeights } from './clearance';
 import { featurePath, type FeaturePath } from './path';
 import { nearestNeighbourOrder } from './patterns';
 import { footprintSources } from './footprints';
@@ -50,6 +50,7 @@ export function planProgram(input: PlanInput): Plan {
     groups.set(key, g);
   }
   const clearances = partClearances(part, probe);
+  const safeHeightAlong = safeHeights(part, probe, clearances);
   const touchPoints: TouchPoint[] = [];
   let current: AxisValues = Object.fromEntries(pm.rotaries.map((x) => [x.name, 0]));
   const maps = linearMapCache(pm);
@@ -61,13 +62,13 @@ export function planProgram(input: PlanInput): Plan {
       for (const it of g.items) warn(it.f, orientation.code, `${it.f.label}: ${orientation.message}; feature not planned`);
       continue;
     }
-    const safeH = safeHeight(part, probe, g.axis, clearances);
+    const safeH = safeHeightAlong(g.axis);
     for (const it of orderInGroup(g)) {
       const clearance = clearances.get(it.f.uuid) ?? probe.clearance;
       const picked = pickRotaries(pm, maps, it, orientation.value, current, featurePath(it.f, it.starts, clearance, g.axis, safeH));
       if (!picked.ok) { warn(it.f, picked.code, `${it.f.label}: ${picked.message}; feature not planned`); continue; }
       current = picked.value;
-      emitPoints(it, r, probe.overtravel, pm, current, maps(current), touchPoints);
+      emitPoints(it, r, probe.overtravel, current, maps(current), touchPoints);
     }
   }
   return { touchPoints, warnings };
@@ -169,49 +170,55 @@ const WORDS = ['X', 'Y', 'Z'] as const;
  * start toward its contact, then the path (safe-in, entry, before, after, exit, safe-out).
  */
 function outsideTravel(pm: PreparedMachine, map: LinearAxesMap, it: Planned, path: FeaturePath): { code: string; message: string } | null {
-  const outside = (x: number, y: number, z: number): { code: string; message: string } | null => {
+  const travel = pm.machine.linear;
+  let word: 'X' | 'Y' | 'Z' = 'X';
+  let value = 0;
+  const outside = (x: number, y: number, z: number): boolean => {
     for (let k = 0 as 0 | 1 | 2; k < 3; k++) {
-      const w = WORDS[k];
-      const [lo, hi] = pm.machine.linear[w];
+      const range = travel[WORDS[k]];
       const v = linearAxisAt(map, x, y, z, k);
-      if (v < lo - 1e-9 || v > hi + 1e-9) {
-        return { code: 'OUT_OF_LIMITS', message: `${w} would be ${v.toFixed(3)} mm, outside its travel ${lo} to ${hi} mm` };
+      if (v < range[0] - 1e-9 || v > range[1] + 1e-9) {
+        word = WORDS[k];
+        value = v;
+        return true;
       }
     }
-    return null;
+    return false;
   };
-  const inList = (pts: Vec3[]) => {
-    for (const p of pts) {
-      const problem = outside(p[0], p[1], p[2]);
-      if (problem) return problem;
+  const anyOutside = (pts: Vec3[]): boolean => {
+    for (const p of pts) if (outside(p[0], p[1], p[2])) return true;
+    return false;
+  };
+  const found = (): boolean => {
+    if (anyOutside(it.starts)) return true;
+    for (let i = 0; i < it.contacts.length; i++) {
+      const s = it.starts[i]!;
+      const n = it.contacts[i]!.normal;
+      // addScaled(s, n, -1), as scalars
+      if (outside(s[0] + n[0] * -1, s[1] + n[1] * -1, s[2] + n[2] * -1)) return true;
     }
-    return null;
+    if (outside(path.safeIn[0], path.safeIn[1], path.safeIn[2]) || outside(path.entry[0], path.entry[1], path.entry[2])) return true;
+    for (const pts of path.before) if (anyOutside(pts)) return true;
+    for (const pts of path.after) if (anyOutside(pts)) return true;
+    return outside(path.exit[0], path.exit[1], path.exit[2]) || outside(path.safeOut[0], path.safeOut[1], path.safeOut[2]);
   };
-  const atStarts = inList(it.starts);
-  if (atStarts) return atStarts;
-  for (let i = 0; i < it.contacts.length; i++) {
-    const s = it.starts[i]!;
-    const n = it.contacts[i]!.normal;
-    // addScaled(s, n, -1), as scalars
-    const problem = outside(s[0] + n[0] * -1, s[1] + n[1] * -1, s[2] + n[2] * -1);
-    if (problem) return problem;
-  }
-  for (const pts of [[path.safeIn, path.entry], ...path.before, ...path.after, [path.exit, path.safeOut]]) {
-    const problem = inList(pts);
-    if (problem) return problem;
-  }
-  return null;
+  if (!found()) return null;
+  const [lo, hi] = travel[word];
+  return { code: 'OUT_OF_LIMITS', message: `${word} would be ${value.toFixed(3)} mm, outside its travel ${lo} to ${hi} mm` };
 }
 
-function emitPoints(it: Planned, r: number, overtravel: number, pm: PreparedMachine, rot: AxisValues, map: LinearAxesMap, out: TouchPoint[]): void {
+function emitPoints(it: Planned, r: number, overtravel: number, rot: AxisValues, map: LinearAxesMap, out: TouchPoint[]): void {
   const uuidOf = touchPointNamer(it.f.uuid, geometryName(geometryKey(it.f)));
+  // keys X, Y, Z, then the rotaries in chain order (as rot holds them)
+  const keys: AxisValues = { X: 0, Y: 0, Z: 0, ...rot };
   for (let i = 0; i < it.contacts.length; i++) {
     const c = it.contacts[i]!;
     const target = addScaled(c.surface, c.normal, r);
     const start = it.starts[i]!;
-    // keys X, Y, Z, then the rotaries in chain order
-    const axes: AxisValues = { X: linearAxisOf(map, start, 0), Y: linearAxisOf(map, start, 1), Z: linearAxisOf(map, start, 2) };
-    for (const x of pm.rotaries) axes[x.name] = rot[x.name]!;
+    const axes: AxisValues = { ...keys };
+    axes.X = linearAxisOf(map, start, 0);
+    axes.Y = linearAxisOf(map, start, 1);
+    axes.Z = linearAxisOf(map, start, 2);
     out.push({
       uuid: uuidOf(i),
       featureUuid: it.f.uuid,
