@@ -34,8 +34,8 @@ export class ReadSlot {
   src = '';
   start = 0;
   end = 0;
-  /** Record: the uuid, lower case. */
-  uuid = '';
+  /** Record: where its uuid starts in src. */
+  uuidAt = 0;
   /** Block: code indices into `Reader.codes`, in line order (first `nCodes`). */
   codes: number[] = [];
   nCodes = 0;
@@ -59,6 +59,19 @@ export interface Reader {
   read(src: string, start: number, end: number, slot: ReadSlot): void;
   /** A comment's text (slot.t === COMMENT). */
   commentText(slot: ReadSlot): string;
+}
+
+/** A record's uuid, lower case (slot.t === RECORD). */
+export const recordUuid = (slot: ReadSlot): string => slot.src.slice(slot.uuidAt, slot.uuidAt + 36).toLowerCase();
+
+/** Whether a record's uuid is `key` (lower case), without cutting it out. */
+export function recordUuidIs(slot: ReadSlot, key: string): boolean {
+  if (key.length !== 36) return false;
+  for (let j = 0; j < 36; j++) {
+    const c = slot.src.charCodeAt(slot.uuidAt + j);
+    if ((c >= 65 && c <= 70 ? c + 32 : c) !== key.charCodeAt(j)) return false;
+  }
+  return true;
 }
 
 const isDigit = (c: number) => c >= 48 && c <= 57;
@@ -128,7 +141,7 @@ export function makeReader(def: PostDefinition, grammar: PostGrammar, rotaryName
   function block(src: string, s: number, e: number, slot: ReadSlot): void {
     slot.nCodes = 0;
     slot.mask = 0;
-    slot.unknown.length = 0;
+    if (slot.unknown.length > 0) slot.unknown = [];
     let a = s;
     while (a < e) {
       const c = src.charCodeAt(a);
@@ -184,6 +197,10 @@ export function makeReader(def: PostDefinition, grammar: PostGrammar, rotaryName
     return true;
   }
 
+  const stateless = (re: RegExp | null) => re === null || (!re.global && !re.sticky);
+  const checksStateless = stateless(grammar.protectedCheck) && stateless(grammar.touchCheck);
+  let lastCheck = '';
+  let lastCheckT = BLANK;
   let tabFrom = 0;
   let tabAt = -1;
   let tabSrc: string | null = null;
@@ -217,10 +234,12 @@ export function makeReader(def: PostDefinition, grammar: PostGrammar, rotaryName
       const c = src.charCodeAt(s);
       if ((c < 128 ? fixedFirst[c] === 1 : fixedNonAscii) && fixedKeys.has(fixedKey(src, s, e)) && fixed.has(src.slice(s, e))) { slot.t = FIXED; return; }
       if (c === 71 /* G */ || c === 77 /* M */) { block(src, s, e, slot); return; }
-      if (isRecord(src, s, e)) { slot.t = RECORD; slot.uuid = src.slice(s + recPre.length, s + recPre.length + 36).toLowerCase(); return; }
+      if (isRecord(src, s, e)) { slot.t = RECORD; slot.uuidAt = s + recPre.length; return; }
+      // the check lines repeat word for word (a test of a regular expression without state gives the same again)
+      if (lastCheck !== '' && spells(lastCheck, src, s, e)) { slot.t = lastCheckT; return; }
       const line = src.slice(s, e);
-      if (grammar.protectedCheck.test(line)) { slot.t = PROTECTED_CHECK; return; }
-      if (grammar.touchCheck?.test(line)) { slot.t = TOUCH_CHECK; return; }
+      if (grammar.protectedCheck.test(line)) { slot.t = PROTECTED_CHECK; if (checksStateless) { lastCheck = line; lastCheckT = PROTECTED_CHECK; } return; }
+      if (grammar.touchCheck?.test(line)) { slot.t = TOUCH_CHECK; if (checksStateless) { lastCheck = line; lastCheckT = TOUCH_CHECK; } return; }
       if (line.startsWith(open) && line.endsWith(close)) {
         const inner = line.slice(open.length, line.length - close.length);
         if (!inner.includes(open) && !inner.includes(close)) { slot.t = COMMENT; return; }

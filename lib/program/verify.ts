@@ -20,7 +20,7 @@ import type { Feature, Part, Probe } from '../features/schema';
 import type { Machine } from '../kinematics/schema';
 import type { Plan, TouchPoint } from './plan-schema';
 import type { ReadyPost } from '../../postprocessors/index';
-import { BLOCK, COMMENT, FEED, makeReader, PROTECTED, PROTECTED_CHECK, RAPID, ReadSlot, RECORD, SKIP, TOUCH, TOUCH_CHECK, UNKNOWN, type Reader } from './verify-read';
+import { BLOCK, COMMENT, FEED, makeReader, PROTECTED, PROTECTED_CHECK, RAPID, ReadSlot, RECORD, recordUuid, recordUuidIs, SKIP, TOUCH, TOUCH_CHECK, UNKNOWN, type Reader } from './verify-read';
 import { CAUTION_PHRASES } from './view-model';
 
 export interface Finding { line: number; code: string; severity: 'error' | 'warning'; message: string }
@@ -42,7 +42,7 @@ type Add = (l: number, c: string, m: string, s?: Finding['severity']) => void;
 interface Ctx {
   pm: PreparedMachine; part: Part; probe: Probe; r: number; zTop: number;
   features: Map<string, { f: Feature; frame: FeatureFrame; clearance: number; top: Vec3 }>;
-  points: Map<string, TouchPoint>;
+  points: Points;
   clearances: Map<string, number>;
   /** Replay frames by rotary setting (see frameAt). */
   frames: Map<string, Frame>;
@@ -80,7 +80,7 @@ export function verifyProgram(input: VerifyInput, post: ReadyPost): VerifyResult
   const ctx: Ctx = {
     pm, part: input.part, probe: input.probe, r: probeRadius(input.probe), zTop: pm.machine.linear.Z[1],
     features: new Map(input.part.features.map((f) => [f.uuid, { f, frame: featureFrame(f), clearance: clearances.get(f.uuid) ?? input.probe.clearance, top: featureTop(f) }])),
-    points: new Map(input.plan.touchPoints.map((tp) => [tp.uuid.toLowerCase(), tp])),
+    points: pointsOf(input.plan.touchPoints),
     clearances, frames: new Map(), findings: [],
   };
   const add: Add = (line, code, message, severity = 'error') => ctx.findings.push({ line, code, severity, message });
@@ -118,21 +118,44 @@ function someLineEndsWith(lines: Lines, s: string): boolean {
   return false;
 }
 
+/** The plan's touch points by lower-case uuid (the last one of a uuid), listed in first-seen order. */
+interface Points { index: Map<string, number>; keys: string[]; list: TouchPoint[] }
+
+function pointsOf(touchPoints: TouchPoint[]): Points {
+  const out: Points = { index: new Map(), keys: [], list: [] };
+  for (const tp of touchPoints) {
+    const key = tp.uuid.toLowerCase();
+    const k = out.index.get(key);
+    if (k !== undefined) out.list[k] = tp;
+    else { out.index.set(key, out.list.length); out.keys.push(key); out.list.push(tp); }
+  }
+  return out;
+}
+
 /**
  * The trip records that give lines their context (lines holding TRIP that read as records):
- * line numbers in order, uuids and touch points. A line works toward the next record (at or
- * after it) and leaves the last one before it.
+ * line numbers in order, uuids and touch points (index into Points, -1 for none). A line
+ * works toward the next record (at or after it) and leaves the last one before it.
  */
-interface Records { at: number[]; uuid: string[]; tp: (TouchPoint | null)[] }
+interface Records { at: number[]; uuid: string[]; point: number[] }
 
-function contextRecords(lines: Lines, ctx: Ctx): Records {
-  const out: Records = { at: [], uuid: [], tp: [] };
+function contextRecords(lines: Lines, points: Points): Records {
+  const out: Records = { at: [], uuid: [], point: [] };
   const slot = new ReadSlot(lines.reader.words.length);
   const text = lines.text;
   let i = 0;
+  let last = -1;
   for (let p = text.indexOf('TRIP'); p !== -1 && i < lines.count; p = text.indexOf('TRIP', lines.start(i))) {
     while (lines.end(i) < p + 4) i++;
-    if (lines.read(i, slot).t === RECORD) { out.at.push(i); out.uuid.push(slot.uuid); out.tp.push(ctx.points.get(slot.uuid) ?? null); }
+    if (lines.read(i, slot).t === RECORD) {
+      // records usually follow the plan's order: try the point after the last one first
+      const guess = last + 1;
+      if (guess < points.keys.length && recordUuidIs(slot, points.keys[guess]!)) last = guess;
+      else { const key = recordUuid(slot); last = points.index.get(key) ?? -1; }
+      out.at.push(i);
+      out.uuid.push(last >= 0 ? points.keys[last]! : recordUuid(slot));
+      out.point.push(last);
+    }
     i++;
   }
   return out;
@@ -181,17 +204,18 @@ function replay(lines: Lines, ctx: Ctx, post: ReadyPost, add: Add) {
   const axisMask = (1 << nW) - 1;
   const modeOf = new Uint8Array(reader.codes.map((c) => (c === 'G90' ? G90 : c === 'G91' ? G91 : 0)));
   const limits = linearLimits(ctx);
-  const records = contextRecords(lines, ctx);
+  const records = contextRecords(lines, ctx.points);
+  const recordTp = (r: number): TouchPoint | null => (records.point[r]! >= 0 ? ctx.points.list[records.point[r]!]! : null);
   const nRec = records.at.length;
   let rec = 0;
   let readRec = 0;
   /** Reads line j (in order) into slot; a context record is already read. */
   const readLine = (j: number, slot: ReadSlot) => {
     while (readRec < nRec && records.at[readRec]! < j) readRec++;
-    if (readRec < nRec && records.at[readRec] === j) { slot.t = RECORD; slot.uuid = records.uuid[readRec]!; }
+    if (readRec < nRec && records.at[readRec] === j) slot.t = RECORD;
     else lines.read(j, slot);
   };
-  const measured = new Set<TouchPoint>();
+  const measured = new Uint8Array(ctx.points.list.length);
   const pos = new Axes(names);
   const from = new Axes(names);
   const frames = new FrameCache(ctx, rot);
@@ -204,6 +228,7 @@ function replay(lines: Lines, ctx: Ctx, post: ReadyPost, add: Add) {
   const needsCheck = post.bundle.grammar.touchCheck !== null;
   let frame: Frame | null = null;
   let lastPose: Pose | null = null;
+  const poses: Pose[] = Array.from({ length: 3 }, () => ({ tip: [0, 0, 0], axis: [0, 0, 1] }));
   let l = new ReadSlot(reader.words.length);
   let next = new ReadSlot(reader.words.length);
   readLine(0, next);
@@ -216,11 +241,13 @@ function replay(lines: Lines, ctx: Ctx, post: ReadyPost, add: Add) {
     while (rec < nRec && records.at[rec]! < i) rec++;
     if (l.t === UNKNOWN) { add(ln, 'UNKNOWN_WORD', `"${l.text().slice(0, 60)}" is not a statement the ${post.bundle.definition.id} post writes`); continue; }
     if (l.t === RECORD) {
-      const tp = rec < nRec && records.at[rec] === i ? records.tp[rec]! : ctx.points.get(l.uuid) ?? null;
-      if (!tp) add(ln, 'UNKNOWN_POINT', `record for ${l.uuid}, which is not a touch point of the plan`);
-      else if (measured.has(tp)) add(ln, 'POINT_MEASURED_TWICE', `touch point ${l.uuid} is recorded again`, 'warning');
-      if (phase !== 'afterSlow') add(ln, 'RECORD_MISSING', `record of ${l.uuid} without a measuring touch just before it`);
-      if (tp) measured.add(tp);
+      const context = rec < nRec && records.at[rec] === i;
+      const uuid = context ? records.uuid[rec]! : recordUuid(l);
+      const point = context ? records.point[rec]! : ctx.points.index.get(uuid) ?? -1;
+      if (point < 0) add(ln, 'UNKNOWN_POINT', `record for ${uuid}, which is not a touch point of the plan`);
+      else if (measured[point]) add(ln, 'POINT_MEASURED_TWICE', `touch point ${uuid} is recorded again`, 'warning');
+      if (phase !== 'afterSlow') add(ln, 'RECORD_MISSING', `record of ${uuid} without a measuring touch just before it`);
+      if (point >= 0) measured[point] = 1;
       phase = 'afterRecord';
       continue;
     }
@@ -257,11 +284,12 @@ function replay(lines: Lines, ctx: Ctx, post: ReadyPost, add: Add) {
     }
     if (!known) continue;
     if (!frame || hasRot) frame = frames.at(pos);
-    const a = lastPose && !rotaryMoved ? lastPose : poseIn(frames.at(from), from.v);
-    const b = poseIn(frame, pos.v);
+    // three pose buffers: b never overwrites a or the last pose
+    const a = lastPose && !rotaryMoved ? lastPose : poseIn(frames.at(from), from.v, poses[0] === lastPose ? poses[1]! : poses[0]!);
+    const b = poseIn(frame, pos.v, poses[0] !== a && poses[0] !== lastPose ? poses[0]! : poses[1] !== a && poses[1] !== lastPose ? poses[1]! : poses[2]!);
     lastPose = b;
-    const tp = rec < nRec ? records.tp[rec]! : null;
-    const left = rec > 0 ? records.tp[rec - 1]! : null;
+    const tp = rec < nRec ? recordTp(rec) : null;
+    const left = rec > 0 ? recordTp(rec - 1) : null;
     if (kind === 'touch') {
       phase = measureMove(ctx, phase, tp, a.tip, b.tip, ln, add);
       lastTouch = tp;
@@ -278,8 +306,8 @@ function replay(lines: Lines, ctx: Ctx, post: ReadyPost, add: Add) {
     }
     checkPath(ctx, kind, fromZ, pos.v[2]!, a, b, frame.safe, tp, left, ln, add);
   }
-  for (const tp of ctx.points.values()) {
-    if (!measured.has(tp)) add(lines.count, 'POINT_NOT_MEASURED', `touch point ${tp.seq} (${tp.uuid}) of the plan is never measured`);
+  for (const [k, tp] of ctx.points.list.entries()) {
+    if (!measured[k]) add(lines.count, 'POINT_NOT_MEASURED', `touch point ${tp.seq} (${tp.uuid}) of the plan is never measured`);
   }
 }
 
@@ -369,15 +397,16 @@ class FrameCache {
   }
 }
 
-/** Tip and tool axis in the part frame at axes X, Y, Z (v[0..2], missing = 0). */
-function poseIn(m: Frame, v: Float64Array): Pose {
+/** Tip and tool axis in the part frame at axes X, Y, Z (v[0..2], missing = 0), written into out. */
+function poseIn(m: Frame, v: Float64Array, out: Pose): Pose {
   const X = v[0]!;
   const Y = v[1]!;
   const Z = v[2]!;
-  return {
-    tip: [m.o[0] + m.x[0] * X + m.y[0] * Y + m.z[0] * Z, m.o[1] + m.x[1] * X + m.y[1] * Y + m.z[1] * Z, m.o[2] + m.x[2] * X + m.y[2] * Y + m.z[2] * Z],
-    axis: m.axis,
-  };
+  out.tip[0] = m.o[0] + m.x[0] * X + m.y[0] * Y + m.z[0] * Z;
+  out.tip[1] = m.o[1] + m.x[1] * X + m.y[1] * Y + m.z[1] * Z;
+  out.tip[2] = m.o[2] + m.x[2] * X + m.y[2] * Y + m.z[2] * Z;
+  out.axis = m.axis;
+  return out;
 }
 
 /**
