@@ -31,10 +31,11 @@ export function featureClearance(f: Feature, sources: FootprintSources, probe: P
 }
 
 /** The point above `p` along the feature's axis at the feature's clearance height. */
-export function liftToClearance(f: Feature, p: Vec3, clearanceMm: number): Vec3 {
-  const n = featureAxis(f);
-  const top = featureTop(f);
-  const h = dot([p[0] - top[0], p[1] - top[1], p[2] - top[2]], n);
+export const liftToClearance = (f: Feature, p: Vec3, clearanceMm: number): Vec3 => liftAbove(p, featureAxis(f), featureTop(f), clearanceMm);
+
+/** `liftToClearance` with the feature's axis `n` and top given (for many points of one feature). */
+export function liftAbove(p: Vec3, n: Vec3, top: Vec3, clearanceMm: number): Vec3 {
+  const h = (p[0] - top[0]) * n[0] + (p[1] - top[1]) * n[1] + (p[2] - top[2]) * n[2];
   return addScaled(p, n, clearanceMm - h);
 }
 

@@ -59,7 +59,10 @@ function planeContacts(f: Extract<Feature, { type: 'plane' }>, fr: FeatureFrame,
   if (hu < 0 || hv < 0) return fault('PLANE_TOO_SMALL', `${f.label}: the face is smaller than twice its margin of ${margin} mm`);
   const { count, raisedFrom } = decideCount(f, 1);
   const prints = footprintsOnPlane(f, ctx.sources, ctx.r);
-  const pts = spreadOverRectangle(count, hu, hv, (p) => prints.some((fp) => fp.contains(p)));
+  const pts = spreadOverRectangle(count, hu, hv, (u, v) => {
+    for (const fp of prints) if (fp.contains(u, v)) return true;
+    return false;
+  });
   if (pts.length < 3) return fault('PLANE_NO_ROOM', `${f.label}: only ${pts.length} free place(s) for touch points inside the margin, away from the features on the face`);
   const ordered = nearestNeighbourOrder(pts, (p) => p);
   const notes = countNote(f, count, raisedFrom);

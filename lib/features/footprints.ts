@@ -9,8 +9,8 @@ import { featureAxis, featureFrame } from './feature-geometry';
 import type { Point2 } from './patterns';
 
 export interface Footprint {
-  /** Whether a (u, v) point lies inside the footprint grown by the keep-out distance. */
-  contains: (p: Point2) => boolean;
+  /** Whether the point (u, v) lies inside the footprint grown by the keep-out distance. */
+  contains: (u: number, v: number) => boolean;
   /** How far the feature stands above the face (0 for a bore or slot). */
   height: number;
 }
@@ -65,10 +65,9 @@ export function footprintsOnPlane(plane: Extract<Feature, { type: 'plane' }>, so
     // only footprints that can reach the face's rectangle
     const reach = (f.type === 'bore' || f.type === 'boss' ? f.diameter / 2 : Math.hypot(f.width, f.length) / 2) + keep;
     if (Math.abs(cu) > plane.size[0] / 2 + reach || Math.abs(cv) > plane.size[1] / 2 + reach) continue;
-    const c: Point2 = [cu, cv];
     if (f.type === 'bore' || f.type === 'boss') {
       const R = f.diameter / 2 + keep;
-      out.push({ height, contains: (p) => (p[0] - c[0]) ** 2 + (p[1] - c[1]) ** 2 <= R * R });
+      out.push({ height, contains: (u, v) => (u - cu) ** 2 + (v - cv) ** 2 <= R * R });
     } else {
       const ff = featureFrame(f);
       const w: Point2 = [dot(ff.e1, fr.e1), dot(ff.e1, fr.e2)];
@@ -76,9 +75,9 @@ export function footprintsOnPlane(plane: Extract<Feature, { type: 'plane' }>, so
       const hl = f.length / 2 + keep;
       out.push({
         height,
-        contains: (p) => {
-          const dx = p[0] - c[0];
-          const dy = p[1] - c[1];
+        contains: (u, v) => {
+          const dx = u - cu;
+          const dy = v - cv;
           return Math.abs(dx * w[0] + dy * w[1]) <= hw && Math.abs(-dx * w[1] + dy * w[0]) <= hl;
         },
       });

@@ -13,7 +13,7 @@
 import { addScaled, type Vec3 } from '../geometry/vec3';
 import type { Feature } from './schema';
 import { featureAxis, featureTop, isInterior } from './feature-geometry';
-import { liftToClearance, ontoHeight } from './clearance';
+import { liftAbove, ontoHeight } from './clearance';
 
 export interface FeaturePath {
   safeIn: Vec3;
@@ -41,8 +41,10 @@ export function featurePath(f: Feature, starts: Vec3[], clearanceMm: number, too
       safeOut: ontoHeight(entry, toolAxis, safeH),
     };
   }
-  const lifts = starts.map((s) => liftToClearance(f, s, clearanceMm));
-  const first = lifts[0] ?? featureTop(f);
+  const n = featureAxis(f);
+  const top = featureTop(f);
+  const lifts = starts.map((s) => liftAbove(s, n, top, clearanceMm));
+  const first = lifts[0] ?? top;
   const last = lifts[lifts.length - 1] ?? first;
   return {
     safeIn: ontoHeight(first, toolAxis, safeH),

@@ -17,68 +17,67 @@ export function levelDepths(n: number, top: number, bottom: number): number[] {
 export type Point2 = [number, number];
 
 /**
- * n points spread over the rectangle [−hu, hu] × [−hv, hv] avoiding `blocked` points:
- * candidates on a fine grid, then farthest-point selection from the corner (−hu, −hv).
- * Farthest-point selection of a 2-D candidate set never puts n ≥ 3 points in one row
- * unless the usable area is itself a line. Returns fewer points when fewer candidates
- * are free.
+ * n points spread over the rectangle [−hu, hu] × [−hv, hv] avoiding points (u, v) that are
+ * `blocked`: candidates on a fine grid, then farthest-point selection from the corner
+ * (−hu, −hv). Farthest-point selection of a 2-D candidate set never puts n ≥ 3 points in
+ * one row unless the usable area is itself a line. Returns fewer points when fewer
+ * candidates are free.
  */
-export function spreadOverRectangle(n: number, hu: number, hv: number, blocked: (p: Point2) => boolean): Point2[] {
+export function spreadOverRectangle(n: number, hu: number, hv: number, blocked: (u: number, v: number) => boolean): Point2[] {
   const aspect = hu / Math.max(hv, 1e-9);
   const total = Math.max(64, 12 * n);
   const nu = Math.max(2, Math.round(Math.sqrt(total * aspect)));
   const nv = Math.max(2, Math.round(total / nu));
-  const cand: Point2[] = [];
+  // free candidates' u and v, then their distances to the chosen set, in one buffer
+  const cap = nu * nv;
+  const buf = new Float64Array(3 * cap);
+  let count = 0;
   for (let j = 0; j < nv; j++) {
     for (let i = 0; i < nu; i++) {
-      const p: Point2 = [-hu + (2 * hu * i) / (nu - 1), -hv + (2 * hv * j) / (nv - 1)];
-      if (!blocked(p)) cand.push(p);
+      const u = -hu + (2 * hu * i) / (nu - 1);
+      const v = -hv + (2 * hv * j) / (nv - 1);
+      if (!blocked(u, v)) { buf[count] = u; buf[cap + count] = v; count++; }
     }
   }
-  if (cand.length === 0) return [];
-  // coordinates and distances to the chosen set in scratch arrays (no callback runs from here on)
-  if (spread.u.length < cand.length) spread = { u: new Float64Array(2 * cand.length), v: new Float64Array(2 * cand.length), d: new Float64Array(2 * cand.length) };
-  const { u: us, v: vs, d: dist } = spread;
-  const first = cand[0] as Point2;
-  // the farthest candidate (first of equals within 1e-12) is tracked while distances are updated
+  if (count === 0) return [];
+  const U = 0;
+  const V = cap;
+  const D = 2 * cap;
+  // the farthest candidate (the first of equals within 1e-12) is found while distances are updated
   let best = -1;
   let bestD = -1;
-  for (let k = 0; k < cand.length; k++) {
-    const p = cand[k] as Point2;
-    us[k] = p[0];
-    vs[k] = p[1];
-    dist[k] = (p[0] - first[0]) ** 2 + (p[1] - first[1]) ** 2;
-    if (dist[k]! > bestD + 1e-12) { bestD = dist[k]!; best = k; }
+  for (let k = 0; k < count; k++) {
+    const d = (buf[U + k]! - buf[U]!) ** 2 + (buf[V + k]! - buf[V]!) ** 2;
+    buf[D + k] = d;
+    if (d > bestD + 1e-12) { bestD = d; best = k; }
   }
-  const chosen: Point2[] = [cand[0] as Point2];
-  while (chosen.length < Math.min(n, cand.length)) {
+  const chosen: Point2[] = [[buf[U]!, buf[V]!]];
+  while (chosen.length < Math.min(n, count)) {
     if (bestD <= 0) break;
-    chosen.push(cand[best] as Point2);
-    const u = us[best]!;
-    const v = vs[best]!;
+    const u = buf[U + best]!;
+    const v = buf[V + best]!;
+    chosen.push([u, v]);
     best = -1;
     bestD = -1;
-    for (let k = 0; k < cand.length; k++) {
-      const d = (us[k]! - u) ** 2 + (vs[k]! - v) ** 2;
-      if (d < dist[k]!) dist[k] = d;
-      if (dist[k]! > bestD + 1e-12) { bestD = dist[k]!; best = k; }
+    for (let k = 0; k < count; k++) {
+      const d = (buf[U + k]! - u) ** 2 + (buf[V + k]! - v) ** 2;
+      if (d < buf[D + k]!) buf[D + k] = d;
+      if (buf[D + k]! > bestD + 1e-12) { bestD = buf[D + k]!; best = k; }
     }
   }
   return chosen;
 }
 
-let spread = { u: new Float64Array(256), v: new Float64Array(256), d: new Float64Array(256) };
-
 /** Reorders 2-D points into a nearest-neighbour chain from the first (short travel); `at` is called once per item. */
 export function nearestNeighbourOrder<T>(items: T[], at: (t: T) => Point2): T[] {
   if (items.length < 3) return items.slice();
-  const xs = new Float64Array(items.length);
-  const ys = new Float64Array(items.length);
-  items.forEach((t, i) => {
-    const [a, b] = at(t);
-    xs[i] = a;
-    ys[i] = b;
-  });
+  const xs: number[] = [];
+  const ys: number[] = [];
+  for (const t of items) {
+    const p = at(t);
+    xs.push(p[0]);
+    ys.push(p[1]);
+  }
   const left = Array.from({ length: items.length - 1 }, (_, k) => k + 1);
   const out: T[] = [items[0] as T];
   let last = 0;

@@ -74,9 +74,10 @@ export function planProgram(input: PlanInput): Plan {
   return { touchPoints, warnings };
 }
 
-type Outcome<T> = { ok: true; value: T } | { ok: false; code: string; message: string };
+type Problem = { code: string; message: string };
+type Outcome<T> = { ok: true; value: T } | ({ ok: false } & Problem);
 
-const failure = (e: unknown): { ok: false; code: string; message: string } => {
+const failure = (e: unknown): { ok: false } & Problem => {
   if (e instanceof GeometryError) return { ok: false, code: e.code, message: e.message };
   throw e;
 };
@@ -153,7 +154,7 @@ function pickRotaries(pm: PreparedMachine, maps: (rot: AxisValues) => LinearAxes
   } catch (e) {
     return failure(e);
   }
-  let firstProblem: { code: string; message: string } | null = null;
+  let firstProblem: Problem | null = null;
   for (const s of sols) {
     const rot = rotaryValues(pm, s);
     const problem = outsideTravel(pm, maps(rot), it, path);
@@ -165,46 +166,50 @@ function pickRotaries(pm: PreparedMachine, maps: (rot: AxisValues) => LinearAxes
 
 const WORDS = ['X', 'Y', 'Z'] as const;
 
+/** The first linear axis (0 X, 1 Y, 2 Z) outside travel for the part-frame tip (x, y, z), or -1. */
+function axisOutside(pm: PreparedMachine, map: LinearAxesMap, x: number, y: number, z: number): -1 | 0 | 1 | 2 {
+  for (let k = 0 as 0 | 1 | 2; k < 3; k++) {
+    const range = pm.machine.linear[WORDS[k]];
+    const v = linearAxisAt(map, x, y, z, k);
+    if (v < range[0] - 1e-9 || v > range[1] + 1e-9) return k;
+  }
+  return -1;
+}
+
+function travelProblem(pm: PreparedMachine, map: LinearAxesMap, x: number, y: number, z: number): Problem | null {
+  const k = axisOutside(pm, map, x, y, z);
+  if (k === -1) return null;
+  const w = WORDS[k];
+  const [lo, hi] = pm.machine.linear[w];
+  return { code: 'OUT_OF_LIMITS', message: `${w} would be ${linearAxisAt(map, x, y, z, k).toFixed(3)} mm, outside its travel ${lo} to ${hi} mm` };
+}
+
+function firstOutside(pm: PreparedMachine, map: LinearAxesMap, pts: Vec3[]): Problem | null {
+  for (const p of pts) if (axisOutside(pm, map, p[0], p[1], p[2]) >= 0) return travelProblem(pm, map, p[0], p[1], p[2]);
+  return null;
+}
+
 /**
  * The first point outside linear travel, in the order: starts, the points 1 mm past each
  * start toward its contact, then the path (safe-in, entry, before, after, exit, safe-out).
  */
-function outsideTravel(pm: PreparedMachine, map: LinearAxesMap, it: Planned, path: FeaturePath): { code: string; message: string } | null {
-  const travel = pm.machine.linear;
-  let word: 'X' | 'Y' | 'Z' = 'X';
-  let value = 0;
-  const outside = (x: number, y: number, z: number): boolean => {
-    for (let k = 0 as 0 | 1 | 2; k < 3; k++) {
-      const range = travel[WORDS[k]];
-      const v = linearAxisAt(map, x, y, z, k);
-      if (v < range[0] - 1e-9 || v > range[1] + 1e-9) {
-        word = WORDS[k];
-        value = v;
-        return true;
-      }
-    }
-    return false;
-  };
-  const anyOutside = (pts: Vec3[]): boolean => {
-    for (const p of pts) if (outside(p[0], p[1], p[2])) return true;
-    return false;
-  };
-  const found = (): boolean => {
-    if (anyOutside(it.starts)) return true;
-    for (let i = 0; i < it.contacts.length; i++) {
-      const s = it.starts[i]!;
-      const n = it.contacts[i]!.normal;
-      // addScaled(s, n, -1), as scalars
-      if (outside(s[0] + n[0] * -1, s[1] + n[1] * -1, s[2] + n[2] * -1)) return true;
-    }
-    if (outside(path.safeIn[0], path.safeIn[1], path.safeIn[2]) || outside(path.entry[0], path.entry[1], path.entry[2])) return true;
-    for (const pts of path.before) if (anyOutside(pts)) return true;
-    for (const pts of path.after) if (anyOutside(pts)) return true;
-    return outside(path.exit[0], path.exit[1], path.exit[2]) || outside(path.safeOut[0], path.safeOut[1], path.safeOut[2]);
-  };
-  if (!found()) return null;
-  const [lo, hi] = travel[word];
-  return { code: 'OUT_OF_LIMITS', message: `${word} would be ${value.toFixed(3)} mm, outside its travel ${lo} to ${hi} mm` };
+function outsideTravel(pm: PreparedMachine, map: LinearAxesMap, it: Planned, path: FeaturePath): Problem | null {
+  const atStarts = firstOutside(pm, map, it.starts);
+  if (atStarts) return atStarts;
+  for (let i = 0; i < it.contacts.length; i++) {
+    const s = it.starts[i]!;
+    const n = it.contacts[i]!.normal;
+    // addScaled(s, n, -1), as scalars
+    const x = s[0] + n[0] * -1;
+    const y = s[1] + n[1] * -1;
+    const z = s[2] + n[2] * -1;
+    if (axisOutside(pm, map, x, y, z) >= 0) return travelProblem(pm, map, x, y, z);
+  }
+  for (const pts of [[path.safeIn, path.entry], ...path.before, ...path.after, [path.exit, path.safeOut]]) {
+    const problem = firstOutside(pm, map, pts);
+    if (problem) return problem;
+  }
+  return null;
 }
 
 function emitPoints(it: Planned, r: number, overtravel: number, rot: AxisValues, map: LinearAxesMap, out: TouchPoint[]): void {
