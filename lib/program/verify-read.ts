@@ -67,6 +67,7 @@ export const recordUuid = (slot: ReadSlot): string => slot.src.slice(slot.uuidAt
 /** Whether a record's uuid is `key` (lower case), without cutting it out. */
 export function recordUuidIs(slot: ReadSlot, key: string): boolean {
   if (key.length !== 36) return false;
+  if (slot.src.startsWith(key, slot.uuidAt)) return true;
   for (let j = 0; j < 36; j++) {
     const c = slot.src.charCodeAt(slot.uuidAt + j);
     if ((c >= 65 && c <= 70 ? c + 32 : c) !== key.charCodeAt(j)) return false;
@@ -81,11 +82,71 @@ const TWO_53 = 2 ** 53;
 
 /** Neither white space nor a line end (so trim() leaves it). */
 const TRIM_SAFE = (c: number) => c > 32 && c < 127;
-/** Whether src[a, b) spells c. */
+/** Whether src[a, b) spells c (startsWith compares long texts faster than a loop). */
 function spells(c: string, src: string, a: number, b: number): boolean {
   if (c.length !== b - a) return false;
+  if (c.length > 12) return src.startsWith(c, a);
   for (let j = 0; j < c.length; j++) if (c.charCodeAt(j) !== src.charCodeAt(a + j)) return false;
   return true;
+}
+
+/** A scanned word: letter, sign (0, or 45 for -, 43 for +), digits, their value as an integer, digits after the point (-1: no point). */
+class Word {
+  letter = 0;
+  sign = 0;
+  m = 0;
+  digits = 0;
+  frac = -1;
+  /** m is exact (below 2^53) and the point at most 22 digits in. */
+  exact = false;
+  /** The word's number, NaN when the text is not a word. */
+  value = NaN;
+}
+
+/**
+ * Scans the token at src[a, …) up to a space or e into w; returns where it ends. A word is a
+ * letter A–Z then an optionally signed decimal; its value equals Number() of the text: an
+ * integer below 2^53 over an exact power of ten is one correctly rounded division, as Number()
+ * rounds (IEEE 754 §5.4.2); longer texts go to Number().
+ */
+function scanInto(w: Word, src: string, a: number, e: number): number {
+  const c = src.charCodeAt(a);
+  let b = a + 1;
+  let ok = c >= 65 && c <= 90;
+  let sign = 0;
+  let m = 0;
+  let digits = 0;
+  let frac = -1;
+  if (b < e) {
+    const d = src.charCodeAt(b);
+    if (d === 45 || d === 43) { sign = d; b++; }
+  }
+  for (; b < e; b++) {
+    const d = src.charCodeAt(b);
+    if (d === 32) break;
+    if (d >= 48 && d <= 57) { m = m * 10 + (d - 48); digits++; if (frac >= 0) frac++; }
+    else if (d === 46 && frac < 0) frac = 0;
+    else ok = false; // a second point (Number() gives NaN) or another character
+  }
+  w.letter = c;
+  w.sign = sign;
+  w.m = m;
+  w.digits = digits;
+  w.frac = frac;
+  w.exact = m < TWO_53 && frac <= 22;
+  w.value = NaN;
+  if (ok && digits > 0) {
+    if (w.exact) w.value = sign === 45 ? -(frac > 0 ? m / POW10[frac]! : m) : frac > 0 ? m / POW10[frac]! : m;
+    else { const v = Number(src.slice(a + 1, b)); if (Number.isFinite(v)) w.value = v; }
+  }
+  return b;
+}
+
+/** A code of the definition scanned as a word; `exact` false when it is not a whole word. */
+function scanWord(c: string, a: number, e: number): Word {
+  const w = new Word();
+  if (c.length === 0 || scanInto(w, c, a, e) !== e || w.value !== w.value) w.exact = false;
+  return w;
 }
 
 export function makeReader(def: PostDefinition, grammar: PostGrammar, rotaryNames: string[], program: string): Reader {
@@ -116,70 +177,50 @@ export function makeReader(def: PostDefinition, grammar: PostGrammar, rotaryName
   });
   const gCodes = byNumber.get('G')!;
   const mCodes = byNumber.get('M')!;
-  // known codes by first letter and length, to find a token's own spelling
-  const spelledKey = (c: number, len: number) => (c & 0x7f) * 32 + Math.min(len, 31);
-  const candidates: number[][] = Array.from({ length: 128 * 32 }, () => []);
-  codes.forEach((c, i) => { if (c.length > 0) candidates[spelledKey(c.charCodeAt(0), c.length)]!.push(i); });
+  // known codes as words: letter, sign, digits, their integer value and the digits after the point
+  // (-1: no point) spell one text, so a scanned word is a known code when all five match
+  const spelledAs = codes.map((c) => scanWord(c, 0, c.length));
   const wordAt = new Int8Array(128).fill(-1);
   words.forEach((w, i) => { if (w.length === 1 && w.charCodeAt(0) < 128 && wordAt[w.charCodeAt(0)] === -1) wordAt[w.charCodeAt(0)] = i; });
   const numberLetter = def.lineNumbers.enabled ? def.lineNumbers.letter.charCodeAt(0) : -1;
   const { open, close } = def.comments;
   const labels = grammar.labelPrefixes;
+  // first characters of the label prefixes (all, for an empty prefix)
+  const labelFirst = new Uint8Array(128).fill(labels.includes('') ? 1 : 0);
+  for (const p of labels) if (p !== '' && p.charCodeAt(0) < 128) labelFirst[p.charCodeAt(0)] = 1;
 
-  /** Known code spelled exactly by src[a, b), or -1. */
-  function codeSpelled(src: string, a: number, b: number): number {
-    const list = candidates[spelledKey(src.charCodeAt(a), b - a)]!;
-    for (let k = 0; k < list.length; k++) if (spells(codes[list[k]!]!, src, a, b)) return list[k]!;
+  /** Known code spelled exactly by the word w just scanned from src[a, b), or -1. */
+  function codeSpelled(w: Word, src: string, a: number, b: number): number {
+    for (let k = 0; k < spelledAs.length; k++) {
+      const c = spelledAs[k]!;
+      if (w.exact ? c.exact && c.m === w.m && c.letter === w.letter && c.digits === w.digits && c.frac === w.frac && c.sign === w.sign : spells(codes[k]!, src, a, b)) return k;
+    }
     return -1;
   }
 
-  /**
-   * Words split at spaces. A word is a letter A–Z then an optionally signed decimal; its value
-   * equals Number() of the text: an integer mantissa below 2^53 over an exact power of ten is one
-   * correctly rounded division, as Number() rounds (IEEE 754 §5.4.2); longer texts go to Number().
-   */
+  /** Words split at spaces (see scanWord). */
   function block(src: string, s: number, e: number, slot: ReadSlot): void {
     slot.nCodes = 0;
     slot.mask = 0;
     if (slot.unknown.length > 0) slot.unknown = [];
+    const w = scratch;
     let a = s;
     while (a < e) {
       const c = src.charCodeAt(a);
       if (c === 32) { a++; continue; }
-      let b = a + 1;
-      let ok = c >= 65 && c <= 90;
-      let neg = false;
-      let m = 0;
-      let digits = 0;
-      let frac = -1;
-      if (b < e) {
-        const d = src.charCodeAt(b);
-        if (d === 45) { neg = true; b++; } else if (d === 43) b++;
-      }
-      for (; b < e; b++) {
-        const d = src.charCodeAt(b);
-        if (d === 32) break;
-        if (d >= 48 && d <= 57) { m = m * 10 + (d - 48); digits++; if (frac >= 0) frac++; }
-        else if (d === 46 && frac < 0) frac = 0;
-        else ok = false; // a second point (Number() gives NaN) or another character
-      }
-      let value = NaN;
-      if (ok && digits > 0) {
-        if (m < TWO_53 && frac <= 22) { value = frac > 0 ? m / POW10[frac]! : m; if (neg) value = -value; }
-        else { value = Number(src.slice(a + 1, b)); if (!Number.isFinite(value)) value = NaN; }
-      }
-      if (value !== value) slot.unknown.push(src.slice(a, b));
+      const b = scanInto(w, src, a, e);
+      if (w.value !== w.value) slot.unknown.push(src.slice(a, b));
       else if (c === 71 || c === 77) {
         // the token as written if known, else letter + value (G01 → G1)
-        const id = codeSpelled(src, a, b);
-        const byValue = id >= 0 ? id : (c === 71 ? gCodes : mCodes).get(value);
+        const id = codeSpelled(w, src, a, b);
+        const byValue = id >= 0 ? id : (c === 71 ? gCodes : mCodes).get(w.value);
         if (byValue !== undefined) slot.codes[slot.nCodes++] = byValue;
         else slot.unknown.push(src.slice(a, b));
       } else if (c < 128 && wordAt[c]! >= 0) {
-        slot.values[wordAt[c]!] = value;
+        slot.values[wordAt[c]!] = w.value;
         slot.mask |= 1 << wordAt[c]!;
       } else {
-        const id = codeSpelled(src, a, b);
+        const id = codeSpelled(w, src, a, b);
         if (id >= 0) slot.codes[slot.nCodes++] = id;
         else slot.unknown.push(src.slice(a, b));
       }
@@ -187,6 +228,7 @@ export function makeReader(def: PostDefinition, grammar: PostGrammar, rotaryName
     }
     slot.t = slot.nCodes === 0 && slot.mask === 0 ? UNKNOWN : BLOCK;
   }
+  const scratch = new Word();
 
   function isRecord(src: string, s: number, e: number): boolean {
     if (e - s !== recPre.length + 36 + recPost.length || !spells(recPre, src, s, s + recPre.length) || !spells(recPost, src, e - recPost.length, e)) return false;
@@ -200,6 +242,8 @@ export function makeReader(def: PostDefinition, grammar: PostGrammar, rotaryName
   const stateless = (re: RegExp | null) => re === null || (!re.global && !re.sticky);
   const checksStateless = stateless(grammar.protectedCheck) && stateless(grammar.touchCheck);
   let lastCheck = '';
+  /** Misses in a row; past a few the check lines differ (coordinates in them) and the memory is not asked. */
+  let checkMisses = 0;
   let lastCheckT = BLANK;
   let tabFrom = 0;
   let tabAt = -1;
@@ -225,7 +269,7 @@ export function makeReader(def: PostDefinition, grammar: PostGrammar, rotaryName
       slot.start = s;
       if (s === e) { slot.t = BLANK; return; }
       const c0 = src.charCodeAt(s);
-      for (const p of labels) if (p.length <= e - s && (p === '' || p.charCodeAt(0) === c0) && src.startsWith(p, s)) { slot.t = FIXED; return; }
+      if (c0 >= 128 || labelFirst[c0] === 1) for (const p of labels) if (p.length <= e - s && src.startsWith(p, s)) { slot.t = FIXED; return; }
       if (src.charCodeAt(s) === numberLetter) {
         let i = s + 1;
         while (i < e && isDigit(src.charCodeAt(i))) i++;
@@ -236,7 +280,10 @@ export function makeReader(def: PostDefinition, grammar: PostGrammar, rotaryName
       if (c === 71 /* G */ || c === 77 /* M */) { block(src, s, e, slot); return; }
       if (isRecord(src, s, e)) { slot.t = RECORD; slot.uuidAt = s + recPre.length; return; }
       // the check lines repeat word for word (a test of a regular expression without state gives the same again)
-      if (lastCheck !== '' && spells(lastCheck, src, s, e)) { slot.t = lastCheckT; return; }
+      if (lastCheck !== '' && checkMisses < 8) {
+        if (spells(lastCheck, src, s, e)) { slot.t = lastCheckT; checkMisses = 0; return; }
+        checkMisses++;
+      }
       const line = src.slice(s, e);
       if (grammar.protectedCheck.test(line)) { slot.t = PROTECTED_CHECK; if (checksStateless) { lastCheck = line; lastCheckT = PROTECTED_CHECK; } return; }
       if (grammar.touchCheck?.test(line)) { slot.t = TOUCH_CHECK; if (checksStateless) { lastCheck = line; lastCheckT = TOUCH_CHECK; } return; }

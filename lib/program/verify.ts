@@ -10,12 +10,12 @@
  * POINT_MEASURED_TWICE, SAFE_START_MISSING. Tolerance on plan positions: 0.01 mm.
  */
 import { cross, distance, dot, norm, sub, type Vec3 } from '../geometry/vec3';
-import { forwardKinematics, type Pose } from '../kinematics/forward';
+import { forwardKinematics, headOffset, partToMachineWith, rotationsAt, type Pose } from '../kinematics/forward';
+import type { Mat3 } from '../geometry/rotation';
 import { prepareMachine, type PreparedMachine } from '../kinematics/machine';
-import { linearAxesFor } from '../kinematics/inverse';
 import type { AxisValues } from '../kinematics/schema';
 import { featureAxis, featureFrame, featureTop, inFreeSpace, isInterior, type FeatureFrame } from '../features/feature-geometry';
-import { partClearances, probeRadius, safeHeight } from '../features/clearance';
+import { partClearances, probeRadius, safeHeights } from '../features/clearance';
 import type { Feature, Part, Probe } from '../features/schema';
 import type { Machine } from '../kinematics/schema';
 import type { Plan, TouchPoint } from './plan-schema';
@@ -41,9 +41,10 @@ type Add = (l: number, c: string, m: string, s?: Finding['severity']) => void;
 
 interface Ctx {
   pm: PreparedMachine; part: Part; probe: Probe; r: number; zTop: number;
-  features: Map<string, { f: Feature; frame: FeatureFrame; clearance: number; top: Vec3 }>;
+  features: Map<string, { f: Feature; frame: FeatureFrame; axis: Vec3; clearance: number; top: Vec3 }>;
   points: Points;
-  clearances: Map<string, number>;
+  /** Safe-plane height along a tool axis (safeHeight). */
+  safeAlong: (t: Vec3) => number;
   /** Replay frames by rotary setting (see frameAt). */
   frames: Map<string, Frame>;
   findings: Finding[];
@@ -54,12 +55,19 @@ const fmt = (p: Vec3) => `[${p.map((v) => v.toFixed(3)).join(', ')}]`;
 /** The program's lines, read in place: line i is text[start(i), end(i)). */
 class Lines {
   readonly count: number;
-  /** Where each line starts, and one past the end of the text + 1. */
-  private readonly starts: number[] = [0];
+  /** Where each line starts; at count, the text's length + 1. */
+  private readonly starts: Int32Array;
   constructor(readonly text: string, readonly reader: Reader) {
-    for (let p = text.indexOf('\n'); p !== -1; p = text.indexOf('\n', p + 1)) this.starts.push(p + 1);
-    this.count = this.starts.length;
-    this.starts.push(text.length + 1);
+    let starts = new Int32Array(1024);
+    let n = 1;
+    for (let p = text.indexOf('\n'); ; p = text.indexOf('\n', p + 1)) {
+      if (n === starts.length) { const grown = new Int32Array(2 * n); grown.set(starts); starts = grown; }
+      if (p === -1) break;
+      starts[n++] = p + 1;
+    }
+    starts[n] = text.length + 1;
+    this.count = n;
+    this.starts = starts;
   }
   start(i: number): number { return this.starts[i]!; }
   end(i: number): number { return this.starts[i + 1]! - 1; }
@@ -79,9 +87,9 @@ export function verifyProgram(input: VerifyInput, post: ReadyPost): VerifyResult
   const clearances = partClearances(input.part, input.probe);
   const ctx: Ctx = {
     pm, part: input.part, probe: input.probe, r: probeRadius(input.probe), zTop: pm.machine.linear.Z[1],
-    features: new Map(input.part.features.map((f) => [f.uuid, { f, frame: featureFrame(f), clearance: clearances.get(f.uuid) ?? input.probe.clearance, top: featureTop(f) }])),
+    features: new Map(input.part.features.map((f) => [f.uuid, { f, frame: featureFrame(f), axis: featureAxis(f), clearance: clearances.get(f.uuid) ?? input.probe.clearance, top: featureTop(f) }])),
     points: pointsOf(input.plan.touchPoints),
-    clearances, frames: new Map(), findings: [],
+    safeAlong: safeHeights(input.part, input.probe, clearances), frames: new Map(), findings: [],
   };
   const add: Add = (line, code, message, severity = 'error') => ctx.findings.push({ line, code, severity, message });
   checkHeader(lines, post, add);
@@ -263,7 +271,8 @@ function replay(lines: Lines, ctx: Ctx, post: ReadyPost, add: Add) {
     if (words === 0 || kind === null) continue;
     const linearWord = (words & XYZ) !== 0;
     const hasRot = (words & rotMask) !== 0;
-    const fromZ = pos.has & 4 ? pos.v[2] : undefined;
+    const hasZ = (pos.has & 4) !== 0;
+    const fromZ = hasZ ? pos.v[2]! : -Infinity;
     const fromCopied = hasRot || !lastPose;
     if (fromCopied) from.copyFrom(pos);
     const known = (pos.has & XYZ) === XYZ;
@@ -276,8 +285,8 @@ function replay(lines: Lines, ctx: Ctx, post: ReadyPost, add: Add) {
     if (fromCopied && hasRot) {
       for (const k of rot) if (k >= 0 && words & (1 << k) && Math.abs(from.v[k]! - pos.v[k]!) > 1e-9) { rotaryMoved = true; break; }
     }
-    if (rotaryMoved && ((fromZ ?? -Infinity) < ctx.zTop - Z_TOP_TOL_MM || linearWord)) {
-      add(ln, 'ROTARY_BELOW_CLEARANCE', `rotary move with Z at ${(fromZ ?? NaN).toFixed(3)} or together with a linear move; rotaries may move only alone with Z at the top of its travel (${ctx.zTop})`);
+    if (rotaryMoved && (fromZ < ctx.zTop - Z_TOP_TOL_MM || linearWord)) {
+      add(ln, 'ROTARY_BELOW_CLEARANCE', `rotary move with Z at ${(hasZ ? fromZ : NaN).toFixed(3)} or together with a linear move; rotaries may move only alone with Z at the top of its travel (${ctx.zTop})`);
     }
     if ((kind === 'protected' || kind === 'touch') && !checkFollows(next, kind, needsCheck, post)) {
       add(ln, 'CHECK_MISSING', kind === 'protected' ? 'protected move without the unexpected-trigger check after it' : 'touch without the no-trigger check after it');
@@ -304,7 +313,12 @@ function replay(lines: Lines, ctx: Ctx, post: ReadyPost, add: Add) {
       phase = afterTouch(phase, kind, incremental, lastTouch !== null && probing.holds(lastTouch, b.tip, false), ln, add);
       if (phase === 'free' || phase === 'afterBackoff') continue;
     }
-    checkPath(ctx, kind, fromZ, pos.v[2]!, a, b, frame.safe, tp, left, ln, add);
+    // high: at or above the safe plane along the tool axis, or Z at the top of its travel
+    const H = frame.safe - SAFE_TOL_MM;
+    const zHigh = ctx.zTop - Z_TOP_TOL_MM;
+    const aHigh = dot(a.tip, b.axis) >= H || fromZ >= zHigh;
+    const bHigh = dot(b.tip, b.axis) >= H || pos.v[2]! >= zHigh;
+    if (!(aHigh && bHigh)) checkPath(ctx, kind, aHigh, bHigh, a, b, frame, tp, left, ln, add);
   }
   for (const [k, tp] of ctx.points.list.entries()) {
     if (!measured[k]) add(lines.count, 'POINT_NOT_MEASURED', `touch point ${tp.seq} (${tp.uuid}) of the plan is never measured`);
@@ -312,29 +326,44 @@ function replay(lines: Lines, ctx: Ctx, post: ReadyPost, add: Add) {
 }
 
 /**
- * The trip replayed at nominal contact: linear axes that put the tip on tp's target at the
- * current rotaries (remembered for the last point, as its two touches share them).
+ * The trip replayed at nominal contact: the linear axes that put the tip on tp's target at the
+ * current rotaries, as linearAxesFor gives them (table rotations and head offset kept per rotary
+ * setting, the axes for the last point, as its two touches share them).
  */
 class TripCache {
+  private tables: Mat3[] | null = null;
+  private head: Vec3 = [0, 0, 0];
   private tp: TouchPoint | null = null;
+  private readonly xyz: Vec3 = [0, 0, 0];
   private readonly at: Float64Array;
-  private readonly xyz = new Float64Array(3);
   constructor(private readonly ctx: Ctx, private readonly pos: Axes, private readonly rot: number[]) { this.at = new Float64Array(rot.length); }
   moveTo(tp: TouchPoint) {
     const { pos, rot, at } = this;
-    let same = this.tp === tp;
-    for (let j = 0; j < rot.length && same; j++) same = Object.is(rotaryAngle(pos, rot[j]!), at[j]);
+    const pm = this.ctx.pm;
+    let same = this.tables !== null;
+    for (let j = 0; j < rot.length && same; j++) same = sameValue(rotaryAngle(pos, rot[j]!), at[j]!);
     if (!same) {
-      const xyz = linearAxesFor(this.ctx.pm, tp.target, pos.obj());
-      this.xyz[0] = xyz.X;
-      this.xyz[1] = xyz.Y;
-      this.xyz[2] = xyz.Z;
-      this.tp = tp;
+      const axes = pos.obj();
+      this.tables = rotationsAt(pm.tables, axes);
+      this.head = headOffset(pm, axes).tip;
+      this.tp = null;
       for (let j = 0; j < rot.length; j++) at[j] = rotaryAngle(pos, rot[j]!);
     }
-    pos.v.set(this.xyz);
+    if (this.tp !== tp) {
+      const tipM = partToMachineWith(pm, this.tables!, tp.target);
+      this.xyz[0] = tipM[0] - this.head[0];
+      this.xyz[1] = tipM[1] - this.head[1];
+      this.xyz[2] = tipM[2] - this.head[2];
+      this.tp = tp;
+    }
+    pos.v[0] = this.xyz[0];
+    pos.v[1] = this.xyz[1];
+    pos.v[2] = this.xyz[2];
   }
 }
+
+/** Object.is for numbers (0 and -0 differ, NaN is NaN). */
+const sameValue = (x: number, y: number): boolean => (x === y ? x !== 0 || 1 / x === 1 / y : x !== x && y !== y);
 
 /** A rotary's value in axes (missing = 0). */
 const rotaryAngle = (axes: Axes, k: number): number => (k >= 0 && axes.has & (1 << k) ? axes.v[k]! : 0);
@@ -389,7 +418,7 @@ class FrameCache {
       const at = axes.obj();
       const base = forwardKinematics(ctx.pm, { ...at, X: 0, Y: 0, Z: 0 });
       const col = (k: 'X' | 'Y' | 'Z') => sub(forwardKinematics(ctx.pm, { ...at, X: 0, Y: 0, Z: 0, [k]: 1 }).tip, base.tip);
-      m = { o: base.tip, x: col('X'), y: col('Y'), z: col('Z'), axis: base.axis, safe: safeHeight(ctx.part, ctx.probe, base.axis, ctx.clearances) };
+      m = { o: base.tip, x: col('X'), y: col('Y'), z: col('Z'), axis: base.axis, safe: ctx.safeAlong(base.axis) };
       ctx.frames.set(key, m);
     }
     this.last = m;
@@ -459,13 +488,17 @@ class ProbingLines {
     }
     const d = this.d[k]!;
     const len = this.len[k]!;
-    const q = sub(p, from);
-    const s = dot(q, d) / (len * len);
+    // q = p - from; along the line s = q·d / len², off it |q × d| / len (as dot, cross and norm give them)
+    const q0 = p[0] - from[0];
+    const q1 = p[1] - from[1];
+    const q2 = p[2] - from[2];
+    const s = (q0 * d[0] + q1 * d[1] + q2 * d[2]) / (len * len);
     if (!(s >= -PLAN_TOL_MM / len && s <= 1 + PLAN_TOL_MM / len)) return false;
-    // off the line: |q × d| / len <= PLAN_TOL_MM
-    const c = cross(q, d);
-    const side = len > 0 && len < Infinity ? hypotSide(c[0], c[1], c[2], PLAN_TOL_MM * len) : 0;
-    return side === 0 ? norm(c) / len <= PLAN_TOL_MM : side < 0;
+    const c0 = q1 * d[2] - q2 * d[1];
+    const c1 = q2 * d[0] - q0 * d[2];
+    const c2 = q0 * d[1] - q1 * d[0];
+    const side = len > 0 && len < Infinity ? hypotSide(c0, c1, c2, PLAN_TOL_MM * len) : 0;
+    return side === 0 ? Math.hypot(c0, c1, c2) / len <= PLAN_TOL_MM : side < 0;
   }
 }
 
@@ -482,26 +515,41 @@ function afterTouch(phase: Phase, kind: Kind, incremental: boolean, away: boolea
 }
 
 /** A move below the safe plane must be along the tool axis, inside a bore's or slot's free space, or at an exterior feature's clearance. */
-function checkPath(ctx: Ctx, kind: Kind, fromZ: number | undefined, toZ: number, a: Pose, b: Pose, safe: number, tp: TouchPoint | null, left: TouchPoint | null, ln: number, add: Add) {
-  const t = b.axis;
-  const H = safe - SAFE_TOL_MM;
-  const zHigh = ctx.zTop - Z_TOP_TOL_MM;
-  const aHigh = dot(a.tip, t) >= H || (fromZ ?? -Infinity) >= zHigh;
-  const bHigh = dot(b.tip, t) >= H || toZ >= zHigh;
-  if (aHigh && bHigh) return;
+function checkPath(ctx: Ctx, kind: Kind, aHigh: boolean, bHigh: boolean, a: Pose, b: Pose, frame: Frame, tp: TouchPoint | null, left: TouchPoint | null, ln: number, add: Add) {
   if (kind === 'rapid') {
-    add(ln, 'RAPID_BELOW_CLEARANCE', `rapid move to ${fmt(b.tip)} (part frame) below the safe plane ${(H + SAFE_TOL_MM).toFixed(3)} mm along the tool axis`);
+    add(ln, 'RAPID_BELOW_CLEARANCE', `rapid move to ${fmt(b.tip)} (part frame) below the safe plane ${(frame.safe - SAFE_TOL_MM + SAFE_TOL_MM).toFixed(3)} mm along the tool axis`);
     return;
   }
   if (kind === 'feed') {
     add(ln, 'UNPROTECTED_MOVE', `unprotected feed move below the safe plane to ${fmt(b.tip)} (part frame) that is not a back-off or retract`);
     return;
   }
-  const d = sub(b.tip, a.tip);
-  const len = norm(d);
-  if (len < 1e-9 || norm(cross(d, t)) <= 1e-3 * len) return;
+  if (alongAxis(a.tip, b.tip, b.axis)) return;
   if (clearOfPart(ctx, tp, a.tip, b.tip, aHigh, bHigh) || clearOfPart(ctx, left, a.tip, b.tip, aHigh, bHigh)) return;
   add(ln, 'UNSAFE_PATH', `protected move from ${fmt(a.tip)} to ${fmt(b.tip)} (part frame) crosses near the part below clearance, neither along the tool axis nor inside a bore or slot`);
+}
+
+/** Whether a → b is (nearly) no move or along t: with d = b - a, norm(d) < 1e-9 or norm(d × t) <= 1e-3 norm(d). */
+function alongAxis(a: Vec3, b: Vec3, t: Vec3): boolean {
+  const d0 = b[0] - a[0];
+  const d1 = b[1] - a[1];
+  const d2 = b[2] - a[2];
+  const c0 = d1 * t[2] - d2 * t[1];
+  const c1 = d2 * t[0] - d0 * t[2];
+  const c2 = d0 * t[1] - d1 * t[0];
+  const tiny = hypotSide(d0, d1, d2, 1e-9);
+  if (tiny < 0) return true;
+  if (tiny > 0) {
+    // 1e-3 norm(d) against norm(d × t) by their squares, when far apart (1e-6 relative)
+    const qd = (d0 * d0 + d1 * d1 + d2 * d2) * 1e-6;
+    const qc = c0 * c0 + c1 * c1 + c2 * c2;
+    if (qd > 1e-290 && qd < 1e290 && qc < 1e290) {
+      if (qc < qd * (1 - 1e-6)) return true;
+      if (qc > qd * (1 + 1e-6)) return false;
+    }
+  }
+  const len = Math.hypot(d0, d1, d2);
+  return len < 1e-9 || Math.hypot(c0, c1, c2) <= 1e-3 * len;
 }
 
 /** Whether a move a → b stays in the free space of tp's bore or slot, or at its exterior feature's clearance. */
@@ -509,7 +557,7 @@ function clearOfPart(ctx: Ctx, tp: TouchPoint | null, a: Vec3, b: Vec3, aHigh: b
   const feat = tp ? ctx.features.get(tp.featureUuid) : undefined;
   if (!feat) return false;
   if (isInterior(feat.f)) return inFreeSpace(feat.f, feat.frame, a, ctx.r, SAFE_TOL_MM) && inFreeSpace(feat.f, feat.frame, b, ctx.r, SAFE_TOL_MM);
-  const n = featureAxis(feat.f);
+  const n = feat.axis;
   const hc = dot(feat.top, n) + feat.clearance - SAFE_TOL_MM;
   return (aHigh || dot(a, n) >= hc) && (bHigh || dot(b, n) >= hc);
 }
