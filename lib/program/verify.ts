@@ -9,7 +9,7 @@
  * RECORD_MISSING, RETRACT_MISSING, UNKNOWN_POINT, POINT_NOT_MEASURED, and the warnings
  * POINT_MEASURED_TWICE, SAFE_START_MISSING. Tolerance on plan positions: 0.01 mm.
  */
-import { cross, distance, dot, norm, sub, type Vec3 } from '../geometry/vec3';
+import { distance, dot, norm, sub, type Vec3 } from '../geometry/vec3';
 import { forwardKinematics, headOffset, partToMachineWith, rotationsAt, type Pose } from '../kinematics/forward';
 import type { Mat3 } from '../geometry/rotation';
 import { prepareMachine, type PreparedMachine } from '../kinematics/machine';
