@@ -65,10 +65,13 @@ function planeContacts(f: Extract<Feature, { type: 'plane' }>, fr: FeatureFrame,
   });
   if (pts.length < 3) return fault('PLANE_NO_ROOM', `${f.label}: only ${pts.length} free place(s) for touch points inside the margin, away from the features on the face`);
   const ordered = nearestNeighbourOrder(pts, (p) => p);
+  const { origin: o } = f;
+  const { e1, e2 } = fr;
   const notes = countNote(f, count, raisedFrom);
   if (pts.length < count) notes.push({ code: 'POINTS_REDUCED', message: `${f.label}: room for ${pts.length} of ${count} points` });
   return {
-    contacts: ordered.map(([u, v]) => ({ surface: addScaled(addScaled(f.origin, fr.e1, u), fr.e2, v), normal: fr.n })),
+    // addScaled(addScaled(origin, e1, u), e2, v), written out (a surface outlives the plan: see plan.ts, `starts`)
+    contacts: ordered.map(([u, v]) => ({ surface: [o[0] + e1[0] * u + e2[0] * v, o[1] + e1[1] * u + e2[1] * v, o[2] + e1[2] * u + e2[2] * v], normal: fr.n })),
     notes,
   };
 }
@@ -127,7 +130,7 @@ function pairContacts(f: Extract<Feature, { type: 'slot' | 'web' }>, fr: Feature
       const mid = addScaled(addScaled(f.center, fr.n, -d), fr.e2, s);
       for (const side of [1, -1]) {
         const out: Vec3 = [fr.e1[0] * side, fr.e1[1] * side, fr.e1[2] * side];
-        contacts.push({ surface: addScaled(mid, out, half), normal: inside ? [-out[0], -out[1], -out[2]] : out });
+        contacts.push({ surface: [mid[0] + out[0] * half, mid[1] + out[1] * half, mid[2] + out[2] * half], normal: inside ? [-out[0], -out[1], -out[2]] : out });
       }
     }
   }

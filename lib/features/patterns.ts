@@ -5,8 +5,11 @@
  */
 
 /** n angles (radians) from `start`, equally spaced round the full circle. */
-export const circleAngles = (n: number, start: number): number[] =>
-  Array.from({ length: n }, (_, i) => start + (2 * Math.PI * i) / n);
+export function circleAngles(n: number, start: number): number[] {
+  const out: number[] = [];
+  for (let i = 0; i < n; i++) out.push(start + (2 * Math.PI * i) / n);
+  return out;
+}
 
 /** n depths evenly between top and bottom (a single level sits midway). */
 export function levelDepths(n: number, top: number, bottom: number): number[] {

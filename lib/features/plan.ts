@@ -8,12 +8,12 @@
  * tool axis; inside a feature, its contacts' own order (contacts.ts). A feature whose
  * orientation or any path point cannot be reached is left out with a warning naming it.
  */
-import { addScaled, cross, dot, GeometryError, normalize, perpendicular, type Vec3 } from '../geometry/vec3';
+import { cross, dot, GeometryError, normalize, perpendicular, type Vec3 } from '../geometry/vec3';
 import { prepareMachine, rotaryValues, type PreparedMachine } from '../kinematics/machine';
 import { linearAxesMap, linearAxisAt, linearAxisOf, solveOrientation, solutionsFor, type LinearAxesMap, type OrientationResult } from '../kinematics/inverse';
 import type { AxisValues } from '../kinematics/schema';
 import type { Plan, PlanWarning, TouchPoint } from '../program/plan-schema';
-import type { Feature } from './schema';
+import type { Characteristic, Feature } from './schema';
 import type { PlanInput } from './plan-input';
 import { characteristicsByFeature } from './counts';
 import { planContacts, type Contact } from './contacts';
@@ -34,16 +34,20 @@ export function planProgram(input: PlanInput): Plan {
   const pm = prepareMachine(input.machine);
   const r = probeRadius(probe);
   const chars = characteristicsByFeature(part);
+  const untoleranced = new Set<Characteristic>();
   const warnings: PlanWarning[] = [];
   const warn = (f: Feature, code: string, message: string) => warnings.push({ featureUuid: f.uuid, label: f.label, code, message });
   const groups = new Map<string, Group>();
   const sources = footprintSources(part);
   for (const f of part.features) {
-    const res = planContacts(f, { sources, r, approach: probe.approach, characteristics: chars.get(f.uuid) ?? new Set() });
+    const res = planContacts(f, { sources, r, approach: probe.approach, characteristics: chars.get(f.uuid) ?? untoleranced });
     for (const n of res.notes) warn(f, n.code, n.message);
     if (res.fault) { warn(f, res.fault.code, `${res.fault.message}; feature not planned`); continue; }
     const axis = featureAxis(f);
-    const starts = res.contacts.map((c) => addScaled(c.surface, c.normal, r + probe.approach));
+    const away = r + probe.approach;
+    // addScaled(surface, normal, away), written out: arrays that outlive the plan come from
+    // allocation sites of their own, which V8 can then place straight in the old generation
+    const starts = res.contacts.map(({ surface: p, normal: n }): Vec3 => [p[0] + n[0] * away, p[1] + n[1] * away, p[2] + n[2] * away]);
     const key = axisKey(axis);
     const g = groups.get(key) ?? { axis, items: [] };
     g.items.push({ f, axis, contacts: res.contacts, starts });
@@ -205,11 +209,17 @@ function outsideTravel(pm: PreparedMachine, map: LinearAxesMap, it: Planned, pat
     const z = s[2] + n[2] * -1;
     if (axisOutside(pm, map, x, y, z) >= 0) return travelProblem(pm, map, x, y, z);
   }
-  for (const pts of [[path.safeIn, path.entry], ...path.before, ...path.after, [path.exit, path.safeOut]]) {
-    const problem = firstOutside(pm, map, pts);
-    if (problem) return problem;
+  const problem = firstOutside(pm, map, [path.safeIn, path.entry]);
+  if (problem) return problem;
+  for (const pts of path.before) {
+    const p = firstOutside(pm, map, pts);
+    if (p) return p;
   }
-  return null;
+  for (const pts of path.after) {
+    const p = firstOutside(pm, map, pts);
+    if (p) return p;
+  }
+  return firstOutside(pm, map, [path.exit, path.safeOut]);
 }
 
 function emitPoints(it: Planned, r: number, overtravel: number, rot: AxisValues, map: LinearAxesMap, out: TouchPoint[]): void {
@@ -217,8 +227,9 @@ function emitPoints(it: Planned, r: number, overtravel: number, rot: AxisValues,
   // keys X, Y, Z, then the rotaries in chain order (as rot holds them)
   const keys: AxisValues = { X: 0, Y: 0, Z: 0, ...rot };
   for (let i = 0; i < it.contacts.length; i++) {
-    const c = it.contacts[i]!;
-    const target = addScaled(c.surface, c.normal, r);
+    const { surface, normal: n } = it.contacts[i]!;
+    // addScaled(surface, n, r) and addScaled(target, n, -overtravel), written out (see `starts`)
+    const target: Vec3 = [surface[0] + n[0] * r, surface[1] + n[1] * r, surface[2] + n[2] * r];
     const start = it.starts[i]!;
     const axes: AxisValues = { ...keys };
     axes.X = linearAxisOf(map, start, 0);
@@ -228,12 +239,12 @@ function emitPoints(it: Planned, r: number, overtravel: number, rot: AxisValues,
       uuid: uuidOf(i),
       featureUuid: it.f.uuid,
       seq: out.length,
-      surface: c.surface,
-      normal: c.normal,
-      direction: [-c.normal[0], -c.normal[1], -c.normal[2]],
+      surface,
+      normal: n,
+      direction: [-n[0], -n[1], -n[2]],
       target,
       start,
-      end: addScaled(target, c.normal, -overtravel),
+      end: [target[0] + n[0] * -overtravel, target[1] + n[1] * -overtravel, target[2] + n[2] * -overtravel],
       toolAxis: it.axis,
       axes,
     });

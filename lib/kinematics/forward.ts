@@ -59,14 +59,33 @@ export function partToMachine(pm: PreparedMachine, axes: AxisValues, p: Vec3, is
 
 /** `partToMachine` with the tables' rotation matrices (`rotationsAt(pm.tables, axes)`) given, for many points. */
 export function partToMachineWith(pm: PreparedMachine, tableRotations: Mat3[], p: Vec3, isDirection = false): Vec3 {
-  let q = applyMat(pm.setupR, p);
-  if (!isDirection) q = add(q, pm.setupOrigin);
-  for (let i = pm.tables.length - 1; i >= 0; i--) {
-    const t = pm.tables[i] as PreparedRotary;
-    const R = tableRotations[i] as Mat3;
-    q = isDirection ? applyMat(R, q) : add(applyMat(R, sub(q, t.p)), t.p);
+  // q = S·p (+ origin), then for each table from the part outward: q = R·(q − c) + c
+  // (R·q for a direction); the same products and sums as applyMat, sub and add, as scalars
+  const S = pm.setupR;
+  let x = S[0] * p[0] + S[1] * p[1] + S[2] * p[2];
+  let y = S[3] * p[0] + S[4] * p[1] + S[5] * p[2];
+  let z = S[6] * p[0] + S[7] * p[1] + S[8] * p[2];
+  if (!isDirection) {
+    x = x + pm.setupOrigin[0];
+    y = y + pm.setupOrigin[1];
+    z = z + pm.setupOrigin[2];
   }
-  return q;
+  for (let i = pm.tables.length - 1; i >= 0; i--) {
+    const c = (pm.tables[i] as PreparedRotary).p;
+    const R = tableRotations[i] as Mat3;
+    const dx = isDirection ? x : x - c[0];
+    const dy = isDirection ? y : y - c[1];
+    const dz = isDirection ? z : z - c[2];
+    x = R[0] * dx + R[1] * dy + R[2] * dz;
+    y = R[3] * dx + R[4] * dy + R[5] * dz;
+    z = R[6] * dx + R[7] * dy + R[8] * dz;
+    if (!isDirection) {
+      x = x + c[0];
+      y = y + c[1];
+      z = z + c[2];
+    }
+  }
+  return [x, y, z];
 }
 
 /** `fk`: axis values → tip and tool axis in the part frame. Also turns a trip record back into a part-frame point. */

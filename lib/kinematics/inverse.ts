@@ -211,8 +211,10 @@ function expandBranch(pm: PreparedMachine, branch: Record<string, number>, previ
   return combos;
 }
 
+const LINEAR = ['X', 'Y', 'Z'] as const;
+
 function withinLinear(pm: PreparedMachine, s: AxisValues, violations: Violation[]): boolean {
-  for (const w of ['X', 'Y', 'Z'] as const) {
+  for (const w of LINEAR) {
     const [lo, hi] = pm.machine.linear[w];
     const v = s[w] ?? 0;
     if (v < lo - 1e-9 || v > hi + 1e-9) {
@@ -223,8 +225,10 @@ function withinLinear(pm: PreparedMachine, s: AxisValues, violations: Violation[
   return true;
 }
 
-const same = (a: AxisValues, b: AxisValues): boolean =>
-  Object.keys(a).every((k) => Math.abs((a[k] ?? 0) - (b[k] ?? 0)) <= SAME_TOL);
+function same(a: AxisValues, b: AxisValues): boolean {
+  for (const k of Object.keys(a)) if (!(Math.abs((a[k] ?? 0) - (b[k] ?? 0)) <= SAME_TOL)) return false;
+  return true;
+}
 
 /** Solutions within limits for a solved orientation, tip in the part frame. */
 export function solutionsFor(machine: Machine | PreparedMachine, tipP: Vec3, orientation: OrientationResult, previous: AxisValues = {}): IkResult {

@@ -69,8 +69,11 @@ export function prepareMachine(machine: Machine | PreparedMachine): PreparedMach
 }
 
 /** Only the rotary values of a set of axis values (0 for a rotary not given), keyed by letter. */
-export const rotaryValues = (pm: PreparedMachine, axes: AxisValues): AxisValues =>
-  Object.fromEntries(pm.rotaries.map((r) => [r.name, axes[r.name] ?? 0]));
+export function rotaryValues(pm: PreparedMachine, axes: AxisValues): AxisValues {
+  const out: AxisValues = {};
+  for (const r of pm.rotaries) out[r.name] = axes[r.name] ?? 0;
+  return out;
+}
 
 /** The axis words of a machine in output order: X, Y, Z, then rotaries alphabetically (A, B, C). */
 export function axisWords(machine: Machine | PreparedMachine): string[] {
