@@ -316,11 +316,13 @@ function replay(lines: Lines, ctx: Ctx, post: ReadyPost, add: Add) {
     // high: at or above the safe plane along the tool axis, or Z at the top of its travel
     const H = frame.safe - SAFE_TOL_MM;
     const zHigh = ctx.zTop - Z_TOP_TOL_MM;
-    const aHigh = dot(a.tip, b.axis) >= H || fromZ >= zHigh;
-    const bHigh = dot(b.tip, b.axis) >= H || pos.v[2]! >= zHigh;
+    const ax = b.axis;
+    const aHigh = a.tip[0] * ax[0] + a.tip[1] * ax[1] + a.tip[2] * ax[2] >= H || fromZ >= zHigh; // dot(a.tip, ax)
+    const bHigh = b.tip[0] * ax[0] + b.tip[1] * ax[1] + b.tip[2] * ax[2] >= H || pos.v[2]! >= zHigh;
     if (!(aHigh && bHigh)) checkPath(ctx, kind, aHigh, bHigh, a, b, frame, tp, left, ln, add);
   }
-  for (const [k, tp] of ctx.points.list.entries()) {
+  for (let k = 0; k < ctx.points.list.length; k++) {
+    const tp = ctx.points.list[k]!;
     if (!measured[k]) add(lines.count, 'POINT_NOT_MEASURED', `touch point ${tp.seq} (${tp.uuid}) of the plan is never measured`);
   }
 }
