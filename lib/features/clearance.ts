@@ -40,10 +40,11 @@ export function liftAbove(p: Vec3, n: Vec3, top: Vec3, clearanceMm: number): Vec
 }
 
 /** Every feature's clearance (featureClearance), by feature uuid: compute once per part. */
-export function partClearances(part: Part, probe: Probe): Map<string, number> {
-  const sources = footprintSources(part);
-  return new Map(part.features.map((f) => [f.uuid, featureClearance(f, sources, probe)]));
-}
+export const partClearances = (part: Part, probe: Probe): Map<string, number> => partClearancesFrom(part, probe, footprintSources(part));
+
+/** `partClearances` with the part's footprint sources given (and the footprints they hold reused). */
+export const partClearancesFrom = (part: Part, probe: Probe, sources: FootprintSources): Map<string, number> =>
+  new Map(part.features.map((f) => [f.uuid, featureClearance(f, sources, probe)]));
 
 /**
  * Height along unit `t` of the safe plane (absolute p·t value): `clearance` above every

@@ -25,7 +25,12 @@ type Standing = Exclude<Feature, { type: 'plane' | 'sphere' }>;
  * their axes, and their positions in `items` grouped by axis (the very same numbers),
  * so a face tests each distinct axis once: prepare once per part.
  */
-export interface FootprintSources { items: { f: Standing; n: Vec3 }[]; byAxis: { n: Vec3; at: number[] }[] }
+export interface FootprintSources {
+  items: { f: Standing; n: Vec3 }[];
+  byAxis: { n: Vec3; at: number[] }[];
+  /** Footprints found so far, by plane and ball radius (`footprintsOnPlane` fills it). */
+  found: Map<Feature, Map<number, Footprint[]>>;
+}
 
 export function footprintSources(part: Part): FootprintSources {
   const items: { f: Standing; n: Vec3 }[] = [];
@@ -39,11 +44,21 @@ export function footprintSources(part: Part): FootprintSources {
     groups.set(key, g);
     items.push({ f, n });
   }
-  return { items, byAxis: [...groups.values()] };
+  return { items, byAxis: [...groups.values()], found: new Map() };
 }
 
 /** Features whose opening or base lies on the plane, with keep-out of the ball radius + 1 mm. */
 export function footprintsOnPlane(plane: Extract<Feature, { type: 'plane' }>, sources: FootprintSources, ballRadius: number): Footprint[] {
+  const byRadius = sources.found.get(plane) ?? new Map<number, Footprint[]>();
+  sources.found.set(plane, byRadius);
+  const known = byRadius.get(ballRadius);
+  if (known) return known;
+  const out = footprintsFor(plane, sources, ballRadius);
+  byRadius.set(ballRadius, out);
+  return out;
+}
+
+function footprintsFor(plane: Extract<Feature, { type: 'plane' }>, sources: FootprintSources, ballRadius: number): Footprint[] {
   const fr = featureFrame(plane);
   const keep = ballRadius + 1;
   const out: Footprint[] = [];

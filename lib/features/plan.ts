@@ -18,7 +18,7 @@ import type { PlanInput } from './plan-input';
 import { characteristicsByFeature } from './counts';
 import { planContacts, type Contact } from './contacts';
 import { featureAxis, geometryKey } from './feature-geometry';
-import { partClearances, probeRadius, safeHeights } from './clearance';
+import { partClearancesFrom, probeRadius, safeHeights } from './clearance';
 import { featurePath, type FeaturePath } from './path';
 import { nearestNeighbourOrder } from './patterns';
 import { footprintSources } from './footprints';
@@ -53,7 +53,7 @@ export function planProgram(input: PlanInput): Plan {
     g.items.push({ f, axis, contacts: res.contacts, starts });
     groups.set(key, g);
   }
-  const clearances = partClearances(part, probe);
+  const clearances = partClearancesFrom(part, probe, sources);
   const safeHeightAlong = safeHeights(part, probe, clearances);
   const touchPoints: TouchPoint[] = [];
   let current: AxisValues = Object.fromEntries(pm.rotaries.map((x) => [x.name, 0]));
@@ -170,27 +170,31 @@ function pickRotaries(pm: PreparedMachine, maps: (rot: AxisValues) => LinearAxes
 
 const WORDS = ['X', 'Y', 'Z'] as const;
 
-/** The first linear axis (0 X, 1 Y, 2 Z) outside travel for the part-frame tip (x, y, z), or -1. */
-function axisOutside(pm: PreparedMachine, map: LinearAxesMap, x: number, y: number, z: number): -1 | 0 | 1 | 2 {
+/** Linear travel with its 1e-9 mm slack: [X min, X max, Y min, Y max, Z min, Z max]. */
+const travelOf = (pm: PreparedMachine): number[] =>
+  WORDS.flatMap((w) => [pm.machine.linear[w][0] - 1e-9, pm.machine.linear[w][1] + 1e-9]);
+
+/** The first linear axis (0 X, 1 Y, 2 Z) outside `travel` for the part-frame tip (x, y, z), or -1. */
+function axisOutside(travel: number[], map: LinearAxesMap, x: number, y: number, z: number): -1 | 0 | 1 | 2 {
   for (let k = 0 as 0 | 1 | 2; k < 3; k++) {
-    const range = pm.machine.linear[WORDS[k]];
     const v = linearAxisAt(map, x, y, z, k);
-    if (v < range[0] - 1e-9 || v > range[1] + 1e-9) return k;
+    if (v < travel[2 * k]! || v > travel[2 * k + 1]!) return k;
   }
   return -1;
 }
 
-function travelProblem(pm: PreparedMachine, map: LinearAxesMap, x: number, y: number, z: number): Problem | null {
-  const k = axisOutside(pm, map, x, y, z);
-  if (k === -1) return null;
-  const w = WORDS[k];
-  const [lo, hi] = pm.machine.linear[w];
-  return { code: 'OUT_OF_LIMITS', message: `${w} would be ${linearAxisAt(map, x, y, z, k).toFixed(3)} mm, outside its travel ${lo} to ${hi} mm` };
+function firstOutside(pm: PreparedMachine, travel: number[], map: LinearAxesMap, pts: Vec3[]): Problem | null {
+  for (const p of pts) {
+    const k = axisOutside(travel, map, p[0], p[1], p[2]);
+    if (k !== -1) return travelProblem(pm, map, p, k);
+  }
+  return null;
 }
 
-function firstOutside(pm: PreparedMachine, map: LinearAxesMap, pts: Vec3[]): Problem | null {
-  for (const p of pts) if (axisOutside(pm, map, p[0], p[1], p[2]) >= 0) return travelProblem(pm, map, p[0], p[1], p[2]);
-  return null;
+function travelProblem(pm: PreparedMachine, map: LinearAxesMap, p: Vec3, k: 0 | 1 | 2): Problem {
+  const w = WORDS[k];
+  const [lo, hi] = pm.machine.linear[w];
+  return { code: 'OUT_OF_LIMITS', message: `${w} would be ${linearAxisOf(map, p, k).toFixed(3)} mm, outside its travel ${lo} to ${hi} mm` };
 }
 
 /**
@@ -198,7 +202,8 @@ function firstOutside(pm: PreparedMachine, map: LinearAxesMap, pts: Vec3[]): Pro
  * start toward its contact, then the path (safe-in, entry, before, after, exit, safe-out).
  */
 function outsideTravel(pm: PreparedMachine, map: LinearAxesMap, it: Planned, path: FeaturePath): Problem | null {
-  const atStarts = firstOutside(pm, map, it.starts);
+  const travel = travelOf(pm);
+  const atStarts = firstOutside(pm, travel, map, it.starts);
   if (atStarts) return atStarts;
   for (let i = 0; i < it.contacts.length; i++) {
     const s = it.starts[i]!;
@@ -207,19 +212,14 @@ function outsideTravel(pm: PreparedMachine, map: LinearAxesMap, it: Planned, pat
     const x = s[0] + n[0] * -1;
     const y = s[1] + n[1] * -1;
     const z = s[2] + n[2] * -1;
-    if (axisOutside(pm, map, x, y, z) >= 0) return travelProblem(pm, map, x, y, z);
+    const k = axisOutside(travel, map, x, y, z);
+    if (k !== -1) return travelProblem(pm, map, [x, y, z], k);
   }
-  const problem = firstOutside(pm, map, [path.safeIn, path.entry]);
-  if (problem) return problem;
-  for (const pts of path.before) {
-    const p = firstOutside(pm, map, pts);
-    if (p) return p;
+  for (const pts of [[path.safeIn, path.entry], ...path.before, ...path.after, [path.exit, path.safeOut]]) {
+    const problem = firstOutside(pm, travel, map, pts);
+    if (problem) return problem;
   }
-  for (const pts of path.after) {
-    const p = firstOutside(pm, map, pts);
-    if (p) return p;
-  }
-  return firstOutside(pm, map, [path.exit, path.safeOut]);
+  return null;
 }
 
 function emitPoints(it: Planned, r: number, overtravel: number, rot: AxisValues, map: LinearAxesMap, out: TouchPoint[]): void {
