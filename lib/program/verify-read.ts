@@ -198,7 +198,7 @@ export function makeReader(def: PostDefinition, grammar: PostGrammar, rotaryName
     return -1;
   }
 
-  /** Words split at spaces (see scanWord). */
+  /** A block: words split at spaces (see scanInto), codes the post knows, the rest unknown. */
   function block(src: string, s: number, e: number, slot: ReadSlot): void {
     slot.nCodes = 0;
     slot.mask = 0;

@@ -45,7 +45,7 @@ interface Ctx {
   points: Points;
   /** Safe-plane height along a tool axis (safeHeight). */
   safeAlong: (t: Vec3) => number;
-  /** Replay frames by rotary setting (see frameAt). */
+  /** Replay frames by rotary setting (see FrameCache). */
   frames: Map<string, Frame>;
   findings: Finding[];
 }
@@ -387,11 +387,12 @@ function checkLimits(ctx: Ctx, pos: Axes, lim: Limits, rot: number[], ln: number
     const v = pos.v[k]!;
     if (pos.has & (1 << k) && (v < lim.lo[k]! - 1e-6 || v > lim.hi[k]! + 1e-6)) add(ln, 'AXIS_LIMIT', `${pos.names[k]}${v.toFixed(3)} is outside its travel ${lim.lo[k]} to ${lim.hi[k]} mm`);
   }
-  ctx.pm.rotaries.forEach((r, j) => {
+  for (let j = 0; j < rot.length; j++) {
+    const r = ctx.pm.rotaries[j]!;
     const k = rot[j]!;
     const v = pos.v[k]!;
     if (k >= 0 && pos.has & (1 << k) && r.min !== null && r.max !== null && (v < r.min - 1e-6 || v > r.max + 1e-6)) add(ln, 'AXIS_LIMIT', `${r.name}${v.toFixed(3)} is outside its travel ${r.min} to ${r.max}°`);
-  });
+  }
 }
 
 /**
@@ -500,7 +501,7 @@ class ProbingLines {
     const c1 = q2 * d[0] - q0 * d[2];
     const c2 = q0 * d[1] - q1 * d[0];
     const side = len > 0 && len < Infinity ? hypotSide(c0, c1, c2, PLAN_TOL_MM * len) : 0;
-    return side === 0 ? Math.hypot(c0, c1, c2) / len <= PLAN_TOL_MM : side < 0;
+    return side === 0 ? norm([c0, c1, c2]) / len <= PLAN_TOL_MM : side < 0;
   }
 }
 
@@ -519,6 +520,7 @@ function afterTouch(phase: Phase, kind: Kind, incremental: boolean, away: boolea
 /** A move below the safe plane must be along the tool axis, inside a bore's or slot's free space, or at an exterior feature's clearance. */
 function checkPath(ctx: Ctx, kind: Kind, aHigh: boolean, bHigh: boolean, a: Pose, b: Pose, frame: Frame, tp: TouchPoint | null, left: TouchPoint | null, ln: number, add: Add) {
   if (kind === 'rapid') {
+    // the plane as H + SAFE_TOL_MM with H = safe - SAFE_TOL_MM, as it has always been printed
     add(ln, 'RAPID_BELOW_CLEARANCE', `rapid move to ${fmt(b.tip)} (part frame) below the safe plane ${(frame.safe - SAFE_TOL_MM + SAFE_TOL_MM).toFixed(3)} mm along the tool axis`);
     return;
   }
@@ -550,8 +552,8 @@ function alongAxis(a: Vec3, b: Vec3, t: Vec3): boolean {
       if (qc > qd * (1 + 1e-6)) return false;
     }
   }
-  const len = Math.hypot(d0, d1, d2);
-  return len < 1e-9 || Math.hypot(c0, c1, c2) <= 1e-3 * len;
+  const len = norm([d0, d1, d2]);
+  return len < 1e-9 || norm([c0, c1, c2]) <= 1e-3 * len;
 }
 
 /** Whether a move a → b stays in the free space of tp's bore or slot, or at its exterior feature's clearance. */
