@@ -30,10 +30,7 @@ export function featureClearance(f: Feature, sources: FootprintSources, probe: P
   return Math.max(protrude + probe.clearance, aboveStarts);
 }
 
-/** The point above `p` along the feature's axis at the feature's clearance height. */
-export const liftToClearance = (f: Feature, p: Vec3, clearanceMm: number): Vec3 => liftAbove(p, featureAxis(f), featureTop(f), clearanceMm);
-
-/** `liftToClearance` with the feature's axis `n` and top given (for many points of one feature). */
+/** The point above `p` along a feature's axis `n` at the clearance height above its `top` (featureAxis, featureTop). */
 export function liftAbove(p: Vec3, n: Vec3, top: Vec3, clearanceMm: number): Vec3 {
   const h = (p[0] - top[0]) * n[0] + (p[1] - top[1]) * n[1] + (p[2] - top[2]) * n[2];
   return addScaled(p, n, clearanceMm - h);

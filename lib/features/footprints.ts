@@ -49,8 +49,8 @@ export function footprintSources(part: Part): FootprintSources {
 
 /** Features whose opening or base lies on the plane, with keep-out of the ball radius + 1 mm. */
 export function footprintsOnPlane(plane: Extract<Feature, { type: 'plane' }>, sources: FootprintSources, ballRadius: number): Footprint[] {
-  const byRadius = sources.found.get(plane) ?? new Map<number, Footprint[]>();
-  sources.found.set(plane, byRadius);
+  let byRadius = sources.found.get(plane);
+  if (!byRadius) sources.found.set(plane, (byRadius = new Map()));
   const known = byRadius.get(ballRadius);
   if (known) return known;
   const out = footprintsFor(plane, sources, ballRadius);

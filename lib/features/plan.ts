@@ -39,14 +39,14 @@ export function planProgram(input: PlanInput): Plan {
   const warn = (f: Feature, code: string, message: string) => warnings.push({ featureUuid: f.uuid, label: f.label, code, message });
   const groups = new Map<string, Group>();
   const sources = footprintSources(part);
+  const away = r + probe.approach;
   for (const f of part.features) {
     const res = planContacts(f, { sources, r, approach: probe.approach, characteristics: chars.get(f.uuid) ?? untoleranced });
     for (const n of res.notes) warn(f, n.code, n.message);
     if (res.fault) { warn(f, res.fault.code, `${res.fault.message}; feature not planned`); continue; }
     const axis = featureAxis(f);
-    const away = r + probe.approach;
     // addScaled(surface, normal, away), written out: arrays that outlive the plan come from
-    // allocation sites of their own, which V8 can then place straight in the old generation
+    // allocation sites of their own, which V8 can then allocate straight in the old generation (pretenure)
     const starts = res.contacts.map(({ surface: p, normal: n }): Vec3 => [p[0] + n[0] * away, p[1] + n[1] * away, p[2] + n[2] * away]);
     const key = axisKey(axis);
     const g = groups.get(key) ?? { axis, items: [] };

@@ -25,14 +25,13 @@ const W = new Int32Array(80);
 
 /** FIPS 180-4 §6.1.2: folds the 64-byte block at `offset` of `bytes` into `h`. */
 export function sha1Block(h: Sha1State, bytes: Uint8Array, offset: number): void {
-  const w = W; // a local: module-level bindings cost a check on every use
   for (let t = 0; t < 16; t++) {
     const i = offset + 4 * t;
-    w[t] = (bytes[i]! << 24) | (bytes[i + 1]! << 16) | (bytes[i + 2]! << 8) | bytes[i + 3]!;
+    W[t] = (bytes[i]! << 24) | (bytes[i + 1]! << 16) | (bytes[i + 2]! << 8) | bytes[i + 3]!;
   }
   for (let t = 16; t < 80; t++) {
-    const x = w[t - 3]! ^ w[t - 8]! ^ w[t - 14]! ^ w[t - 16]!;
-    w[t] = (x << 1) | (x >>> 31);
+    const x = W[t - 3]! ^ W[t - 8]! ^ W[t - 14]! ^ W[t - 16]!;
+    W[t] = (x << 1) | (x >>> 31);
   }
   let a = h[0]!;
   let b = h[1]!;
@@ -42,19 +41,19 @@ export function sha1Block(h: Sha1State, bytes: Uint8Array, offset: number): void
   // four rounds of 20 steps, each with its own function f_t and constant K_t (§4.1.1, §4.2.1)
   let t = 0;
   for (; t < 20; t++) {
-    const temp = (((a << 5) | (a >>> 27)) + ((b & c) | (~b & d)) + e + 0x5a827999 + w[t]!) | 0;
+    const temp = (((a << 5) | (a >>> 27)) + ((b & c) | (~b & d)) + e + 0x5a827999 + W[t]!) | 0;
     e = d; d = c; c = (b << 30) | (b >>> 2); b = a; a = temp;
   }
   for (; t < 40; t++) {
-    const temp = (((a << 5) | (a >>> 27)) + (b ^ c ^ d) + e + 0x6ed9eba1 + w[t]!) | 0;
+    const temp = (((a << 5) | (a >>> 27)) + (b ^ c ^ d) + e + 0x6ed9eba1 + W[t]!) | 0;
     e = d; d = c; c = (b << 30) | (b >>> 2); b = a; a = temp;
   }
   for (; t < 60; t++) {
-    const temp = (((a << 5) | (a >>> 27)) + ((b & c) | (b & d) | (c & d)) + e + 0x8f1bbcdc + w[t]!) | 0;
+    const temp = (((a << 5) | (a >>> 27)) + ((b & c) | (b & d) | (c & d)) + e + 0x8f1bbcdc + W[t]!) | 0;
     e = d; d = c; c = (b << 30) | (b >>> 2); b = a; a = temp;
   }
   for (; t < 80; t++) {
-    const temp = (((a << 5) | (a >>> 27)) + (b ^ c ^ d) + e + 0xca62c1d6 + w[t]!) | 0;
+    const temp = (((a << 5) | (a >>> 27)) + (b ^ c ^ d) + e + 0xca62c1d6 + W[t]!) | 0;
     e = d; d = c; c = (b << 30) | (b >>> 2); b = a; a = temp;
   }
   h[0] = (h[0]! + a) | 0;
@@ -75,7 +74,7 @@ export function sha1Finish(h: Sha1State, buf: Uint8Array, offset: number, tailLe
   const blocks = tailLength + 9 <= 64 ? 1 : 2;
   const end = offset + 64 * blocks;
   buf[offset + tailLength] = 0x80;
-  for (let i = offset + tailLength + 1; i < end - 8; i++) buf[i] = 0;
+  buf.fill(0, offset + tailLength + 1, end - 8);
   const bits = totalLength * 8;
   const hi = Math.floor(bits / 0x100000000);
   const lo = bits >>> 0;

@@ -72,11 +72,10 @@ export function touchPointNamer(featureUuid: string, geometry: string): (index: 
   return (index) => {
     // String(number) is ASCII (digits, sign, point, exponent, Infinity, NaN), at most 24 characters
     const digits = String(index);
-    // (plain loops: these copies are too short for TypedArray.set to pay)
-    let n = 0;
-    for (; n < tail.length; n++) msg[n] = tail[n]!;
+    msg.set(tail);
+    let n = tail.length;
     for (let i = 0; i < digits.length; i++) msg[n++] = digits.charCodeAt(i);
-    for (let i = 0; i < 5; i++) h[i] = mid[i]!;
+    h.set(mid);
     sha1Finish(h, msg, 0, n, length + digits.length);
     return uuidText();
   };
