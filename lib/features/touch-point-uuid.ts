@@ -24,15 +24,10 @@ const chars: number[] = new Array<number>(36).fill(0);
 
 /** Writes the namespace and the UTF-8 bytes of `name` into `msg` (with 128 bytes to spare); returns the length. */
 function message(name: string): number {
-  let ascii = true;
-  for (let i = 0; i < name.length && ascii; i++) ascii = name.charCodeAt(i) < 0x80;
-  const bytes = ascii ? null : utf8.encode(name);
-  const length = 16 + (bytes ? bytes.length : name.length);
-  if (msg.length < length + 128) msg = new Uint8Array(2 * (length + 128));
+  const room = 16 + 3 * name.length + 128; // UTF-8 takes at most 3 bytes per UTF-16 unit
+  if (msg.length < room) msg = new Uint8Array(2 * room);
   msg.set(NAMESPACE_BYTES);
-  if (bytes) msg.set(bytes, 16);
-  else for (let i = 0; i < name.length; i++) msg[16 + i] = name.charCodeAt(i);
-  return length;
+  return 16 + utf8.encodeInto(name, msg.subarray(16)).written;
 }
 
 const HEX = '0123456789abcdef';
