@@ -48,19 +48,6 @@ export class ReadSlot {
   text(): string { return this.src.slice(this.start, this.end); }
 }
 
-/** Trip position words X, Y, Z then the rotaries (by letter), and last F. */
-export interface Reader {
-  words: string[];
-  /** Index of F in `words`. */
-  feed: number;
-  codes: string[];
-  codeKind: Uint8Array;
-  /** Reads src[start, end) (one line, without its newline) into `slot`. */
-  read(src: string, start: number, end: number, slot: ReadSlot): void;
-  /** A comment's text (slot.t === COMMENT). */
-  commentText(slot: ReadSlot): string;
-}
-
 /** A record's uuid, lower case (slot.t === RECORD). */
 export const recordUuid = (slot: ReadSlot): string => slot.src.slice(slot.uuidAt, slot.uuidAt + 36).toLowerCase();
 
@@ -149,61 +136,151 @@ function scanWord(c: string, a: number, e: number): Word {
   return w;
 }
 
-export function makeReader(def: PostDefinition, grammar: PostGrammar, rotaryNames: string[], program: string): Reader {
-  const words = [...new Set(['X', 'Y', 'Z', ...rotaryNames, 'F'])];
-  const feed = words.indexOf('F');
-  const values = ['X', 'Y', 'Z', ...rotaryNames].map((w) => def.trip.value.replace('{word}', w).replace('{var}', def.trip.variables[w] ?? '#0')).join(def.trip.separator);
-  const [recPre, recPostRaw] = def.trip.record.split('{uuid}') as [string, string];
-  const recPost = recPostRaw.replace('{values}', values);
-  const fill = (l: string) => l.replace('{program}', program);
-  const fixed = new Set([
-    ...grammar.fixedLines, ...def.programStart.map(fill), ...def.programEnd, ...def.probeOn, ...def.probeOff,
-    ...def.trip.open.map(fill), ...def.trip.close, ...def.stops.miss, ...def.stops.hit,
-  ]);
-  // a line can equal a fixed statement only if it has its length and first and last characters
-  const fixedKey = (s: string, a: number, b: number) => (b - a) * 0x40000 + (s.charCodeAt(a) & 0x1ff) * 0x200 + (s.charCodeAt(b - 1) & 0x1ff);
-  const fixedKeys = new Set([...fixed].filter((l) => l !== '').map((l) => fixedKey(l, 0, l.length)));
-  const fixedFirst = new Uint8Array(128);
-  let fixedNonAscii = false;
-  for (const l of fixed) if (l !== '') { if (l.charCodeAt(0) < 128) fixedFirst[l.charCodeAt(0)] = 1; else fixedNonAscii = true; }
-  const codes = [...new Set(def.knownCodes)];
-  const codeKind = new Uint8Array(codes.map((c) => (c === 'G0' ? RAPID : c === 'G1' ? FEED : grammar.protectedCodes.includes(c) ? PROTECTED
-    : grammar.touchCodes.includes(c) ? TOUCH : grammar.skipCodes.includes(c) ? SKIP : NO_MOTION)));
-  // G and M codes by number (code = letter + String(value), as a block writes it)
-  const byNumber = new Map<string, Map<number, number>>([['G', new Map()], ['M', new Map()]]);
-  codes.forEach((c, i) => {
-    const m = byNumber.get(c[0] ?? '');
-    if (m && `${c[0]}${Number(c.slice(1))}` === c) m.set(Number(c.slice(1)), i);
-  });
-  const gCodes = byNumber.get('G')!;
-  const mCodes = byNumber.get('M')!;
-  // known codes as words: letter, sign, digits, their integer value and the digits after the point
-  // (-1: no point) spell one text, so a scanned word is a known code when all five match
-  const spelledAs = codes.map((c) => scanWord(c, 0, c.length));
-  const wordAt = new Int8Array(128).fill(-1);
-  words.forEach((w, i) => { if (w.length === 1 && w.charCodeAt(0) < 128 && wordAt[w.charCodeAt(0)] === -1) wordAt[w.charCodeAt(0)] = i; });
-  const numberLetter = def.lineNumbers.enabled ? def.lineNumbers.letter.charCodeAt(0) : -1;
-  const { open, close } = def.comments;
-  const labels = grammar.labelPrefixes;
-  // first characters of the label prefixes (all, for an empty prefix)
-  const labelFirst = new Uint8Array(128).fill(labels.includes('') ? 1 : 0);
-  for (const p of labels) if (p !== '' && p.charCodeAt(0) < 128) labelFirst[p.charCodeAt(0)] = 1;
+/**
+ * A reader for one post's programs. A class, so that its methods are the same functions from one
+ * program to the next (the engine keeps their optimised code).
+ */
+export class Reader {
+  /** Trip position words X, Y, Z then the rotaries (by letter), and last F. */
+  readonly words: string[];
+  /** Index of F in `words`. */
+  readonly feed: number;
+  readonly codes: string[];
+  readonly codeKind: Uint8Array;
+  private readonly grammar: PostGrammar;
+  private readonly recPre: string;
+  private readonly recPost: string;
+  private readonly fixed: Set<string>;
+  private readonly fixedKeys: Set<number>;
+  private readonly fixedFirst = new Uint8Array(128);
+  private readonly fixedNonAscii: boolean;
+  /** G and M codes by number (code = letter + String(value), as a block writes it). */
+  private readonly gCodes = new Map<number, number>();
+  private readonly mCodes = new Map<number, number>();
+  /**
+   * Known codes as words: letter, sign, digits, their integer value and the digits after the
+   * point (-1: no point) spell one text, so a scanned word is a known code when all five match.
+   */
+  private readonly spelledAs: Word[];
+  private readonly wordAt = new Int8Array(128).fill(-1);
+  private readonly numberLetter: number;
+  private readonly open: string;
+  private readonly close: string;
+  private readonly labels: string[];
+  /** First characters of the label prefixes (all, for an empty prefix). */
+  private readonly labelFirst = new Uint8Array(128);
+  private readonly checksStateless: boolean;
+  private readonly scratch = new Word();
+  /** The last check line and its kind: check lines repeat word for word (a stateless test gives the same again). */
+  private lastCheck = '';
+  private lastCheckT = BLANK;
+  /** Misses in a row; past a few the check lines differ (coordinates in them) and the memory is not asked. */
+  private checkMisses = 0;
+  private tabFrom = 0;
+  private tabAt = -1;
+  private tabSrc: string | null = null;
+
+  constructor(def: PostDefinition, grammar: PostGrammar, rotaryNames: string[], program: string) {
+    this.grammar = grammar;
+    this.words = [...new Set(['X', 'Y', 'Z', ...rotaryNames, 'F'])];
+    this.feed = this.words.indexOf('F');
+    const values = ['X', 'Y', 'Z', ...rotaryNames].map((w) => def.trip.value.replace('{word}', w).replace('{var}', def.trip.variables[w] ?? '#0')).join(def.trip.separator);
+    const [recPre, recPostRaw] = def.trip.record.split('{uuid}') as [string, string];
+    this.recPre = recPre;
+    this.recPost = recPostRaw.replace('{values}', values);
+    const fill = (l: string) => l.replace('{program}', program);
+    this.fixed = new Set([
+      ...grammar.fixedLines, ...def.programStart.map(fill), ...def.programEnd, ...def.probeOn, ...def.probeOff,
+      ...def.trip.open.map(fill), ...def.trip.close, ...def.stops.miss, ...def.stops.hit,
+    ]);
+    // a line can equal a fixed statement only if it has its length and first and last characters
+    this.fixedKeys = new Set([...this.fixed].filter((l) => l !== '').map((l) => fixedKey(l, 0, l.length)));
+    let nonAscii = false;
+    for (const l of this.fixed) if (l !== '') { if (l.charCodeAt(0) < 128) this.fixedFirst[l.charCodeAt(0)] = 1; else nonAscii = true; }
+    this.fixedNonAscii = nonAscii;
+    this.codes = [...new Set(def.knownCodes)];
+    this.codeKind = new Uint8Array(this.codes.map((c) => (c === 'G0' ? RAPID : c === 'G1' ? FEED : grammar.protectedCodes.includes(c) ? PROTECTED
+      : grammar.touchCodes.includes(c) ? TOUCH : grammar.skipCodes.includes(c) ? SKIP : NO_MOTION)));
+    this.codes.forEach((c, i) => {
+      const m = c[0] === 'G' ? this.gCodes : c[0] === 'M' ? this.mCodes : null;
+      if (m && `${c[0]}${Number(c.slice(1))}` === c) m.set(Number(c.slice(1)), i);
+    });
+    this.spelledAs = this.codes.map((c) => scanWord(c, 0, c.length));
+    this.words.forEach((w, i) => { if (w.length === 1 && w.charCodeAt(0) < 128 && this.wordAt[w.charCodeAt(0)] === -1) this.wordAt[w.charCodeAt(0)] = i; });
+    this.numberLetter = def.lineNumbers.enabled ? def.lineNumbers.letter.charCodeAt(0) : -1;
+    this.open = def.comments.open;
+    this.close = def.comments.close;
+    this.labels = grammar.labelPrefixes;
+    this.labelFirst.fill(this.labels.includes('') ? 1 : 0);
+    for (const p of this.labels) if (p !== '' && p.charCodeAt(0) < 128) this.labelFirst[p.charCodeAt(0)] = 1;
+    const stateless = (re: RegExp | null) => re === null || (!re.global && !re.sticky);
+    this.checksStateless = stateless(grammar.protectedCheck) && stateless(grammar.touchCheck);
+  }
+
+  /** A comment's text (slot.t === COMMENT). */
+  commentText(slot: ReadSlot): string { return slot.src.slice(slot.start + this.open.length, slot.end - this.close.length); }
+
+  /** Reads src[s, e) (one line, without its newline) into `slot`. */
+  read(src: string, s: number, e: number, slot: ReadSlot): void {
+    if (s < e && !(TRIM_SAFE(src.charCodeAt(s)) && TRIM_SAFE(src.charCodeAt(e - 1)) && !this.hasTab(src, s, e))) {
+      const raw = src.slice(s, e);
+      src = raw.includes('\t') ? raw.replace(/\t/g, ' ').trim() : raw.trim();
+      s = 0;
+      e = src.length;
+    }
+    slot.src = src;
+    slot.end = e;
+    slot.start = s;
+    if (s === e) { slot.t = BLANK; return; }
+    const c0 = src.charCodeAt(s);
+    if (c0 >= 128 || this.labelFirst[c0] === 1) for (const p of this.labels) if (p.length <= e - s && src.startsWith(p, s)) { slot.t = FIXED; return; }
+    if (c0 === this.numberLetter) {
+      let i = s + 1;
+      while (i < e && isDigit(src.charCodeAt(i))) i++;
+      if (i > s + 1 && i < e && src.charCodeAt(i) === 32) slot.start = s = i + 1;
+    }
+    const c = src.charCodeAt(s);
+    if ((c < 128 ? this.fixedFirst[c] === 1 : this.fixedNonAscii) && this.fixedKeys.has(fixedKey(src, s, e)) && this.fixed.has(src.slice(s, e))) { slot.t = FIXED; return; }
+    if (c === 71 /* G */ || c === 77 /* M */) { this.block(src, s, e, slot); return; }
+    if (this.isRecord(src, s, e)) { slot.t = RECORD; slot.uuidAt = s + this.recPre.length; return; }
+    if (this.lastCheck !== '' && this.checkMisses < 8) {
+      if (spells(this.lastCheck, src, s, e)) { slot.t = this.lastCheckT; this.checkMisses = 0; return; }
+      this.checkMisses++;
+    }
+    const line = src.slice(s, e);
+    if (this.grammar.protectedCheck.test(line)) { slot.t = PROTECTED_CHECK; this.remember(line, PROTECTED_CHECK); return; }
+    if (this.grammar.touchCheck?.test(line)) { slot.t = TOUCH_CHECK; this.remember(line, TOUCH_CHECK); return; }
+    const { open, close } = this;
+    if (line.startsWith(open) && line.endsWith(close)) {
+      const inner = line.slice(open.length, line.length - close.length);
+      if (!inner.includes(open) && !inner.includes(close)) { slot.t = COMMENT; return; }
+    }
+    this.block(src, s, e, slot);
+  }
+
+  private remember(line: string, t: number) {
+    if (!this.checksStateless) return;
+    this.lastCheck = line;
+    this.lastCheckT = t;
+  }
 
   /** Known code spelled exactly by the word w just scanned from src[a, b), or -1. */
-  function codeSpelled(w: Word, src: string, a: number, b: number): number {
+  private codeSpelled(w: Word, src: string, a: number, b: number): number {
+    const spelledAs = this.spelledAs;
     for (let k = 0; k < spelledAs.length; k++) {
       const c = spelledAs[k]!;
-      if (w.exact ? c.exact && c.m === w.m && c.letter === w.letter && c.digits === w.digits && c.frac === w.frac && c.sign === w.sign : spells(codes[k]!, src, a, b)) return k;
+      if (w.exact ? c.exact && c.m === w.m && c.letter === w.letter && c.digits === w.digits && c.frac === w.frac && c.sign === w.sign : spells(this.codes[k]!, src, a, b)) return k;
     }
     return -1;
   }
 
   /** A block: words split at spaces (see scanInto), codes the post knows, the rest unknown. */
-  function block(src: string, s: number, e: number, slot: ReadSlot): void {
+  private block(src: string, s: number, e: number, slot: ReadSlot): void {
     slot.nCodes = 0;
     slot.mask = 0;
     if (slot.unknown.length > 0) slot.unknown = [];
-    const w = scratch;
+    const w = this.scratch;
+    const wordAt = this.wordAt;
     let a = s;
     while (a < e) {
       const c = src.charCodeAt(a);
@@ -212,15 +289,15 @@ export function makeReader(def: PostDefinition, grammar: PostGrammar, rotaryName
       if (w.value !== w.value) slot.unknown.push(src.slice(a, b));
       else if (c === 71 || c === 77) {
         // the token as written if known, else letter + value (G01 → G1)
-        const id = codeSpelled(w, src, a, b);
-        const byValue = id >= 0 ? id : (c === 71 ? gCodes : mCodes).get(w.value);
+        const id = this.codeSpelled(w, src, a, b);
+        const byValue = id >= 0 ? id : (c === 71 ? this.gCodes : this.mCodes).get(w.value);
         if (byValue !== undefined) slot.codes[slot.nCodes++] = byValue;
         else slot.unknown.push(src.slice(a, b));
       } else if (c < 128 && wordAt[c]! >= 0) {
         slot.values[wordAt[c]!] = w.value;
         slot.mask |= 1 << wordAt[c]!;
       } else {
-        const id = codeSpelled(w, src, a, b);
+        const id = this.codeSpelled(w, src, a, b);
         if (id >= 0) slot.codes[slot.nCodes++] = id;
         else slot.unknown.push(src.slice(a, b));
       }
@@ -228,9 +305,9 @@ export function makeReader(def: PostDefinition, grammar: PostGrammar, rotaryName
     }
     slot.t = slot.nCodes === 0 && slot.mask === 0 ? UNKNOWN : BLOCK;
   }
-  const scratch = new Word();
 
-  function isRecord(src: string, s: number, e: number): boolean {
+  private isRecord(src: string, s: number, e: number): boolean {
+    const { recPre, recPost } = this;
     if (e - s !== recPre.length + 36 + recPost.length || !spells(recPre, src, s, s + recPre.length) || !spells(recPost, src, e - recPost.length, e)) return false;
     for (let i = s + recPre.length, n = i + 36; i < n; i++) {
       const c = src.charCodeAt(i);
@@ -239,59 +316,14 @@ export function makeReader(def: PostDefinition, grammar: PostGrammar, rotaryName
     return true;
   }
 
-  const stateless = (re: RegExp | null) => re === null || (!re.global && !re.sticky);
-  const checksStateless = stateless(grammar.protectedCheck) && stateless(grammar.touchCheck);
-  let lastCheck = '';
-  /** Misses in a row; past a few the check lines differ (coordinates in them) and the memory is not asked. */
-  let checkMisses = 0;
-  let lastCheckT = BLANK;
-  let tabFrom = 0;
-  let tabAt = -1;
-  let tabSrc: string | null = null;
   /** Whether src[s, e) holds a tab (one forward search over a program read in order). */
-  function hasTab(src: string, s: number, e: number): boolean {
-    if (src !== tabSrc || s < tabFrom || (tabAt !== -1 && tabAt < s)) { tabSrc = src; tabFrom = s; tabAt = src.indexOf('\t', s); }
-    return tabAt !== -1 && tabAt < e;
+  private hasTab(src: string, s: number, e: number): boolean {
+    if (src !== this.tabSrc || s < this.tabFrom || (this.tabAt !== -1 && this.tabAt < s)) { this.tabSrc = src; this.tabFrom = s; this.tabAt = src.indexOf('\t', s); }
+    return this.tabAt !== -1 && this.tabAt < e;
   }
-
-  return {
-    words, feed, codes, codeKind,
-    commentText: (slot) => slot.src.slice(slot.start + open.length, slot.end - close.length),
-    read(src, s, e, slot) {
-      if (s < e && !(TRIM_SAFE(src.charCodeAt(s)) && TRIM_SAFE(src.charCodeAt(e - 1)) && !hasTab(src, s, e))) {
-        const raw = src.slice(s, e);
-        src = raw.includes('\t') ? raw.replace(/\t/g, ' ').trim() : raw.trim();
-        s = 0;
-        e = src.length;
-      }
-      slot.src = src;
-      slot.end = e;
-      slot.start = s;
-      if (s === e) { slot.t = BLANK; return; }
-      const c0 = src.charCodeAt(s);
-      if (c0 >= 128 || labelFirst[c0] === 1) for (const p of labels) if (p.length <= e - s && src.startsWith(p, s)) { slot.t = FIXED; return; }
-      if (src.charCodeAt(s) === numberLetter) {
-        let i = s + 1;
-        while (i < e && isDigit(src.charCodeAt(i))) i++;
-        if (i > s + 1 && i < e && src.charCodeAt(i) === 32) slot.start = s = i + 1;
-      }
-      const c = src.charCodeAt(s);
-      if ((c < 128 ? fixedFirst[c] === 1 : fixedNonAscii) && fixedKeys.has(fixedKey(src, s, e)) && fixed.has(src.slice(s, e))) { slot.t = FIXED; return; }
-      if (c === 71 /* G */ || c === 77 /* M */) { block(src, s, e, slot); return; }
-      if (isRecord(src, s, e)) { slot.t = RECORD; slot.uuidAt = s + recPre.length; return; }
-      // the check lines repeat word for word (a test of a regular expression without state gives the same again)
-      if (lastCheck !== '' && checkMisses < 8) {
-        if (spells(lastCheck, src, s, e)) { slot.t = lastCheckT; checkMisses = 0; return; }
-        checkMisses++;
-      }
-      const line = src.slice(s, e);
-      if (grammar.protectedCheck.test(line)) { slot.t = PROTECTED_CHECK; if (checksStateless) { lastCheck = line; lastCheckT = PROTECTED_CHECK; } return; }
-      if (grammar.touchCheck?.test(line)) { slot.t = TOUCH_CHECK; if (checksStateless) { lastCheck = line; lastCheckT = TOUCH_CHECK; } return; }
-      if (line.startsWith(open) && line.endsWith(close)) {
-        const inner = line.slice(open.length, line.length - close.length);
-        if (!inner.includes(open) && !inner.includes(close)) { slot.t = COMMENT; return; }
-      }
-      block(src, s, e, slot);
-    },
-  };
 }
+
+/** A line's length, first and last characters, as one number. */
+const fixedKey = (s: string, a: number, b: number) => (b - a) * 0x40000 + (s.charCodeAt(a) & 0x1ff) * 0x200 + (s.charCodeAt(b - 1) & 0x1ff);
+
+export const makeReader = (def: PostDefinition, grammar: PostGrammar, rotaryNames: string[], program: string): Reader => new Reader(def, grammar, rotaryNames, program);

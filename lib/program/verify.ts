@@ -145,10 +145,25 @@ function pointsOf(touchPoints: TouchPoint[]): Points {
  * line numbers in order, uuids and touch points (index into Points, -1 for none). A line
  * works toward the next record (at or after it) and leaves the last one before it.
  */
-interface Records { at: number[]; uuid: string[]; point: number[] }
+class Records {
+  readonly at: number[] = [];
+  readonly uuid: string[] = [];
+  readonly point: number[] = [];
+  /** Where reading in order has got to (see read). */
+  private readAt = 0;
+  constructor(private readonly points: Points) {}
+  /** The touch point of record r, or null. */
+  tp(r: number): TouchPoint | null { const k = this.point[r]!; return k >= 0 ? this.points.list[k]! : null; }
+  /** Reads line j (lines in order) into slot; a record is already read. */
+  read(lines: Lines, j: number, slot: ReadSlot) {
+    while (this.readAt < this.at.length && this.at[this.readAt]! < j) this.readAt++;
+    if (this.readAt < this.at.length && this.at[this.readAt] === j) slot.t = RECORD;
+    else lines.read(j, slot);
+  }
+}
 
 function contextRecords(lines: Lines, points: Points): Records {
-  const out: Records = { at: [], uuid: [], point: [] };
+  const out = new Records(points);
   const slot = new ReadSlot(lines.reader.words.length);
   const text = lines.text;
   let i = 0;
@@ -213,16 +228,8 @@ function replay(lines: Lines, ctx: Ctx, post: ReadyPost, add: Add) {
   const modeOf = new Uint8Array(reader.codes.map((c) => (c === 'G90' ? G90 : c === 'G91' ? G91 : 0)));
   const limits = linearLimits(ctx);
   const records = contextRecords(lines, ctx.points);
-  const recordTp = (r: number): TouchPoint | null => (records.point[r]! >= 0 ? ctx.points.list[records.point[r]!]! : null);
   const nRec = records.at.length;
   let rec = 0;
-  let readRec = 0;
-  /** Reads line j (in order) into slot; a context record is already read. */
-  const readLine = (j: number, slot: ReadSlot) => {
-    while (readRec < nRec && records.at[readRec]! < j) readRec++;
-    if (readRec < nRec && records.at[readRec] === j) slot.t = RECORD;
-    else lines.read(j, slot);
-  };
   const measured = new Uint8Array(ctx.points.list.length);
   const pos = new Axes(names);
   const from = new Axes(names);
@@ -239,12 +246,12 @@ function replay(lines: Lines, ctx: Ctx, post: ReadyPost, add: Add) {
   const poses: Pose[] = Array.from({ length: 3 }, () => ({ tip: [0, 0, 0], axis: [0, 0, 1] }));
   let l = new ReadSlot(reader.words.length);
   let next = new ReadSlot(reader.words.length);
-  readLine(0, next);
+  records.read(lines, 0, next);
   for (let i = 0; i < lines.count; i++) {
     const t = l;
     l = next;
     next = t;
-    readLine(i + 1, next);
+    records.read(lines, i + 1, next);
     const ln = i + 1;
     while (rec < nRec && records.at[rec]! < i) rec++;
     if (l.t === UNKNOWN) { add(ln, 'UNKNOWN_WORD', `"${l.text().slice(0, 60)}" is not a statement the ${post.bundle.definition.id} post writes`); continue; }
@@ -297,8 +304,8 @@ function replay(lines: Lines, ctx: Ctx, post: ReadyPost, add: Add) {
     const a = lastPose && !rotaryMoved ? lastPose : poseIn(frames.at(from), from.v, poses[0] === lastPose ? poses[1]! : poses[0]!);
     const b = poseIn(frame, pos.v, poses[0] !== a && poses[0] !== lastPose ? poses[0]! : poses[1] !== a && poses[1] !== lastPose ? poses[1]! : poses[2]!);
     lastPose = b;
-    const tp = rec < nRec ? recordTp(rec) : null;
-    const left = rec > 0 ? recordTp(rec - 1) : null;
+    const tp = rec < nRec ? records.tp(rec) : null;
+    const left = rec > 0 ? records.tp(rec - 1) : null;
     if (kind === 'touch') {
       phase = measureMove(ctx, phase, tp, a.tip, b.tip, ln, add);
       lastTouch = tp;
