@@ -239,7 +239,7 @@ export function solutionsFor(machine: Machine | PreparedMachine, tipP: Vec3, ori
     for (const angles of expandBranch(pm, branch, previous, orientation.free, violations)) {
       // keys X, Y, Z first, then the rotaries in chain order
       const s: AxisValues = { X: 0, Y: 0, Z: 0 };
-      pm.rotaries.forEach((r, i) => { s[r.name] = angles[i]!; });
+      for (let i = 0; i < pm.rotaries.length; i++) s[pm.rotaries[i]!.name] = angles[i]!;
       const lin = linearAxesFor(pm, tipP, s);
       s.X = lin.X;
       s.Y = lin.Y;
