@@ -57,7 +57,7 @@ export function planProgram(input: PlanInput): Plan {
   const safeHeightAlong = safeHeights(part, probe, clearances);
   const touchPoints: TouchPoint[] = [];
   let current: AxisValues = Object.fromEntries(pm.rotaries.map((x) => [x.name, 0]));
-  const maps = linearMapCache(pm);
+  const place: Placing = { pm, mapFor: linearMapCache(pm), travel: travelOf(pm) };
   const left = [...groups.values()];
   while (left.length > 0) {
     const { index, orientation } = nextGroup(pm, left, current);
@@ -69,10 +69,10 @@ export function planProgram(input: PlanInput): Plan {
     const safeH = safeHeightAlong(g.axis);
     for (const it of orderInGroup(g)) {
       const clearance = clearances.get(it.f.uuid) ?? probe.clearance;
-      const picked = pickRotaries(pm, maps, it, orientation.value, current, featurePath(it.f, it.starts, clearance, g.axis, safeH));
+      const picked = pickRotaries(place, it, orientation.value, current, featurePath(it.f, it.starts, clearance, g.axis, safeH));
       if (!picked.ok) { warn(it.f, picked.code, `${it.f.label}: ${picked.message}; feature not planned`); continue; }
       current = picked.value;
-      emitPoints(it, r, probe.overtravel, current, maps(current), touchPoints);
+      emitPoints(it, r, probe.overtravel, current, place.mapFor(current), touchPoints);
     }
   }
   return { touchPoints, warnings };
@@ -147,8 +147,12 @@ function linearMapCache(pm: PreparedMachine): (rot: AxisValues) => LinearAxesMap
   };
 }
 
+/** What placing a feature needs of the machine: the machine, linear maps by rotary setting, linear travel (travelOf). */
+interface Placing { pm: PreparedMachine; mapFor: (rot: AxisValues) => LinearAxesMap; travel: number[] }
+
 /** One rotary setting for the whole feature: least travel first, every path point inside travel. */
-function pickRotaries(pm: PreparedMachine, maps: (rot: AxisValues) => LinearAxesMap, it: Planned, orientation: OrientationResult, current: AxisValues, path: FeaturePath): Outcome<AxisValues> {
+function pickRotaries(place: Placing, it: Planned, orientation: OrientationResult, current: AxisValues, path: FeaturePath): Outcome<AxisValues> {
+  const { pm } = place;
   const first = it.starts[0];
   if (!first) return { ok: false, code: 'NO_POINTS', message: 'no touch points' };
   let sols: AxisValues[];
@@ -161,7 +165,7 @@ function pickRotaries(pm: PreparedMachine, maps: (rot: AxisValues) => LinearAxes
   let firstProblem: Problem | null = null;
   for (const s of sols) {
     const rot = rotaryValues(pm, s);
-    const problem = outsideTravel(pm, maps(rot), it, path);
+    const problem = outsideTravel(place, place.mapFor(rot), it, path);
     if (!problem) return { ok: true, value: rot };
     firstProblem ??= problem;
   }
@@ -201,8 +205,7 @@ function travelProblem(pm: PreparedMachine, map: LinearAxesMap, p: Vec3, k: 0 | 
  * The first point outside linear travel, in the order: starts, the points 1 mm past each
  * start toward its contact, then the path (safe-in, entry, before, after, exit, safe-out).
  */
-function outsideTravel(pm: PreparedMachine, map: LinearAxesMap, it: Planned, path: FeaturePath): Problem | null {
-  const travel = travelOf(pm);
+function outsideTravel({ pm, travel }: Placing, map: LinearAxesMap, it: Planned, path: FeaturePath): Problem | null {
   const atStarts = firstOutside(pm, travel, map, it.starts);
   if (atStarts) return atStarts;
   for (let i = 0; i < it.contacts.length; i++) {
