@@ -19,7 +19,11 @@ const ASCII: Record<string, string> = { '—': '-', '–': '-', '⌀': 'D', '°'
 
 /** Comment text made safe for a control: ASCII only, no brackets or parentheses, optional upper case. */
 export function cleanComment(text: string, def: PostDefinition): string {
-  let s = text.replace(/[^\x20-\x7e]/g, (c) => ASCII[c] ?? '');
+  let s = text;
+  // rebuilt from its characters, the ASCII text is also stored one byte per character
+  // (a replace keeps the two-byte form of its input, and one such line makes the whole
+  // program two-byte: twice the memory, slower for the verifier to scan)
+  if (/[^\x20-\x7e]/.test(s)) s = s.replace(/[^\x20-\x7e]/g, (c) => ASCII[c] ?? '').split('').join('');
   s = s.replace(/[()[\]]/g, ' ').replace(/\s+/g, ' ').trim();
   return def.comments.uppercase ? s.toUpperCase() : s;
 }
