@@ -137,9 +137,12 @@ function orderInGroup(g: Group): Planned[] {
 function linearMapCache(pm: PreparedMachine): (rot: AxisValues) => LinearAxesMap {
   const names = pm.rotaries.map((x) => x.name);
   const recent: { rot: AxisValues; map: LinearAxesMap }[] = [];
+  const sameAngles = (a: AxisValues, b: AxisValues): boolean => {
+    for (const n of names) if (!Object.is(a[n], b[n])) return false;
+    return true;
+  };
   return (rot) => {
-    const hit = recent.find((e) => names.every((n) => Object.is(e.rot[n], rot[n])));
-    if (hit) return hit.map;
+    for (const e of recent) if (sameAngles(e.rot, rot)) return e.map;
     const map = linearAxesMap(pm, rot);
     recent.unshift({ rot, map });
     if (recent.length > 4) recent.pop();
@@ -218,11 +221,17 @@ function outsideTravel({ pm, travel }: Placing, map: LinearAxesMap, it: Planned,
     const k = axisOutside(travel, map, x, y, z);
     if (k !== -1) return travelProblem(pm, map, [x, y, z], k);
   }
-  for (const pts of [[path.safeIn, path.entry], ...path.before, ...path.after, [path.exit, path.safeOut]]) {
+  const ends = firstOutside(pm, travel, map, [path.safeIn, path.entry]);
+  if (ends) return ends;
+  for (const pts of path.before) {
     const problem = firstOutside(pm, travel, map, pts);
     if (problem) return problem;
   }
-  return null;
+  for (const pts of path.after) {
+    const problem = firstOutside(pm, travel, map, pts);
+    if (problem) return problem;
+  }
+  return firstOutside(pm, travel, map, [path.exit, path.safeOut]);
 }
 
 function emitPoints(it: Planned, r: number, overtravel: number, rot: AxisValues, map: LinearAxesMap, out: TouchPoint[]): void {

@@ -138,12 +138,15 @@ export function solveOrientation(machine: Machine | PreparedMachine, axisP: Vec3
   return { branches, singular: free.size > 0, free: [...free] };
 }
 
+const NO_OFFSET: Readonly<Vec3> = [0, 0, 0];
+
 /** Linear axes placing the tip at part-frame point `tipP` with the rotaries at the given angles (degrees). */
 export function linearAxesFor(machine: Machine | PreparedMachine, tipP: Vec3, rotaries: AxisValues): { X: number; Y: number; Z: number } {
   const pm = prepareMachine(machine);
   const tipM = partToMachine(pm, rotaries, tipP);
-  const h = headOffset(pm, rotaries);
-  return { X: tipM[0] - h.tip[0], Y: tipM[1] - h.tip[1], Z: tipM[2] - h.tip[2] };
+  // without head axes the tip sits at (X, Y, Z): the offset is zero (and x − 0 is x, to the bit)
+  const h = pm.heads.length === 0 ? NO_OFFSET : headOffset(pm, rotaries).tip;
+  return { X: tipM[0] - h[0], Y: tipM[1] - h[1], Z: tipM[2] - h[2] };
 }
 
 /**
