@@ -15,6 +15,8 @@ import { addScaled, cross, normalize, type Vec3 } from '../../lib/geometry/vec3'
 import type { Feature } from '../../lib/features/schema';
 
 const RUNS = 7;
+/** Untimed runs first, as in the evaluation benchmark (the engine optimises the code on the first calls). */
+const WARM_UPS = 2;
 
 function uuidFor(i: number): string {
   const h = i.toString(16).padStart(12, '0');
@@ -79,6 +81,10 @@ export default async function bench(): Promise<void> {
   const cpu: number[] = [];
   const parts = { plan: [] as number[], post: [] as number[], verify: [] as number[] };
   let ok = true;
+  for (let r = 0; r < WARM_UPS; r++) {
+    const plan = planProgram(input);
+    verifyProgram({ ...input, plan, program: postProgram({ ...input, plan, postprocessor: 'ngc' }, post) }, post);
+  }
   for (let r = 0; r < RUNS; r++) {
     const c0 = cpuMs();
     const t0 = performance.now();
@@ -97,14 +103,15 @@ export default async function bench(): Promise<void> {
     lines = program.split('\n').length;
     ok &&= res.ok && plan.warnings.length === 0;
   }
+  for (let r = 0; r < WARM_UPS; r++) floor(lines);
   const floors = Array.from({ length: RUNS }, () => floor(lines));
   const total = median(times);
   const fl = median(floors.map((f) => f[0]));
   const flCpu = median(floors.map((f) => f[1]));
   console.log(`features 1000, touch points ${points}, program lines ${lines}, verified ok: ${ok}`);
   console.log(`plan+IK ${median(parts.plan).toFixed(1)} ms, post ${median(parts.post).toFixed(1)} ms, verify ${median(parts.verify).toFixed(1)} ms`);
-  console.log(`generate (plan + IK + post + verify), median of ${RUNS}: ${total.toFixed(1)} ms (target ≤ 250 ms)`);
-  console.log(`floor (format + join ${lines} G-code lines), median of ${RUNS}: ${fl.toFixed(1)} ms`);
+  console.log(`generate (plan + IK + post + verify), median of ${RUNS} after ${WARM_UPS} untimed: ${total.toFixed(1)} ms (target ≤ 250 ms)`);
+  console.log(`floor (format + join ${lines} G-code lines), median of ${RUNS} after ${WARM_UPS} untimed: ${fl.toFixed(1)} ms`);
   console.log(`ratio ${(total / fl).toFixed(2)}× the floor (target ≤ 5×)`);
   console.log(`CPU time of this process: generate ${median(cpu).toFixed(1)} ms, floor ${flCpu.toFixed(1)} ms, ratio ${(median(cpu) / flCpu).toFixed(2)}×; load average ${(await import('node:os')).loadavg()[0]!.toFixed(1)} on ${(await import('node:os')).cpus().length} cores`);
 }
