@@ -14,8 +14,8 @@
  * a limited one gives every equivalent angle inside [min, max].
  */
 import { addScaled, cross, dot, GeometryError, norm, normalize, reject, scale, sub, type Vec3 } from '../geometry/vec3';
-import { applyMat, toDeg, wrapDeg } from '../geometry/rotation';
-import { headOffset, partToMachine, partToMachineWith, rotationsAt } from './forward';
+import { applyMat, toDeg, wrapDeg, type Mat3 } from '../geometry/rotation';
+import { headOffset, partToMachineWith, rotationsAt } from './forward';
 import { prepareMachine, type PreparedMachine, type PreparedRotary } from './machine';
 import type { AxisValues, Machine } from './schema';
 import { chooseSolution } from './choose';
@@ -140,13 +140,28 @@ export function solveOrientation(machine: Machine | PreparedMachine, axisP: Vec3
 
 const NO_OFFSET: Readonly<Vec3> = [0, 0, 0];
 
+/** What `linearAxesFor` needs at one rotary setting: the tables' rotations and the head's tip offset. */
+export interface RotarySetting { tables: Mat3[]; head: Readonly<Vec3> }
+
+export function rotarySetting(pm: PreparedMachine, rotaries: AxisValues): RotarySetting {
+  // without head axes the tip sits at (X, Y, Z): the offset is zero (and x − 0 is x, to the bit)
+  return { tables: rotationsAt(pm.tables, rotaries), head: pm.heads.length === 0 ? NO_OFFSET : headOffset(pm, rotaries).tip };
+}
+
+/** Linear axes X, Y, Z (written into `out`) placing the tip at part-frame point `tipP` at a rotary setting. */
+export function linearAxesIn(pm: PreparedMachine, s: RotarySetting, tipP: Vec3, out: Vec3 = [0, 0, 0]): Vec3 {
+  const tipM = partToMachineWith(pm, s.tables, tipP);
+  out[0] = tipM[0] - s.head[0];
+  out[1] = tipM[1] - s.head[1];
+  out[2] = tipM[2] - s.head[2];
+  return out;
+}
+
 /** Linear axes placing the tip at part-frame point `tipP` with the rotaries at the given angles (degrees). */
 export function linearAxesFor(machine: Machine | PreparedMachine, tipP: Vec3, rotaries: AxisValues): { X: number; Y: number; Z: number } {
   const pm = prepareMachine(machine);
-  const tipM = partToMachine(pm, rotaries, tipP);
-  // without head axes the tip sits at (X, Y, Z): the offset is zero (and x − 0 is x, to the bit)
-  const h = pm.heads.length === 0 ? NO_OFFSET : headOffset(pm, rotaries).tip;
-  return { X: tipM[0] - h[0], Y: tipM[1] - h[1], Z: tipM[2] - h[2] };
+  const v = linearAxesIn(pm, rotarySetting(pm, rotaries), tipP);
+  return { X: v[0], Y: v[1], Z: v[2] };
 }
 
 /**
@@ -158,12 +173,8 @@ export interface LinearAxesMap { o: Vec3; c: [Vec3, Vec3, Vec3] }
 
 export function linearAxesMap(machine: Machine | PreparedMachine, rotaries: AxisValues): LinearAxesMap {
   const pm = prepareMachine(machine);
-  const h = headOffset(pm, rotaries).tip;
-  const tables = rotationsAt(pm.tables, rotaries);
-  const at = (p: Vec3): Vec3 => {
-    const tipM = partToMachineWith(pm, tables, p);
-    return [tipM[0] - h[0], tipM[1] - h[1], tipM[2] - h[2]];
-  };
+  const setting = rotarySetting(pm, rotaries);
+  const at = (p: Vec3): Vec3 => linearAxesIn(pm, setting, p);
   const o = at([0, 0, 0]);
   const col = (e: Vec3): Vec3 => {
     const v = at(e);

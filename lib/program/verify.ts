@@ -10,8 +10,8 @@
  * POINT_MEASURED_TWICE, SAFE_START_MISSING. Tolerance on plan positions: 0.01 mm.
  */
 import { distance, dot, norm, sub, type Vec3 } from '../geometry/vec3';
-import { forwardKinematics, headOffset, partToMachineWith, rotationsAt, type Pose } from '../kinematics/forward';
-import type { Mat3 } from '../geometry/rotation';
+import { forwardKinematics, type Pose } from '../kinematics/forward';
+import { linearAxesIn, rotarySetting, type RotarySetting } from '../kinematics/inverse';
 import { prepareMachine, type PreparedMachine } from '../kinematics/machine';
 import type { AxisValues } from '../kinematics/schema';
 import { featureAxis, featureFrame, featureTop, inFreeSpace, isInterior, type FeatureFrame } from '../features/feature-geometry';
@@ -336,12 +336,11 @@ function replay(lines: Lines, ctx: Ctx, post: ReadyPost, add: Add) {
 
 /**
  * The trip replayed at nominal contact: the linear axes that put the tip on tp's target at the
- * current rotaries, as linearAxesFor gives them (table rotations and head offset kept per rotary
- * setting, the axes for the last point, as its two touches share them).
+ * current rotaries, as linearAxesFor gives them (the rotary setting kept while the rotaries
+ * stay, the axes for the last point, as its two touches share them).
  */
 class TripCache {
-  private tables: Mat3[] | null = null;
-  private head: Vec3 = [0, 0, 0];
+  private setting: RotarySetting | null = null;
   private tp: TouchPoint | null = null;
   private readonly xyz: Vec3 = [0, 0, 0];
   private readonly at: Float64Array;
@@ -349,20 +348,15 @@ class TripCache {
   moveTo(tp: TouchPoint) {
     const { pos, rot, at } = this;
     const pm = this.ctx.pm;
-    let same = this.tables !== null;
+    let same = this.setting !== null;
     for (let j = 0; j < rot.length && same; j++) same = sameValue(rotaryAngle(pos, rot[j]!), at[j]!);
     if (!same) {
-      const axes = pos.obj();
-      this.tables = rotationsAt(pm.tables, axes);
-      this.head = headOffset(pm, axes).tip;
+      this.setting = rotarySetting(pm, pos.obj());
       this.tp = null;
       for (let j = 0; j < rot.length; j++) at[j] = rotaryAngle(pos, rot[j]!);
     }
     if (this.tp !== tp) {
-      const tipM = partToMachineWith(pm, this.tables!, tp.target);
-      this.xyz[0] = tipM[0] - this.head[0];
-      this.xyz[1] = tipM[1] - this.head[1];
-      this.xyz[2] = tipM[2] - this.head[2];
+      linearAxesIn(pm, this.setting!, tp.target, this.xyz);
       this.tp = tp;
     }
     pos.v[0] = this.xyz[0];
