@@ -2,10 +2,15 @@
  * Centroid and 3×3 scatter matrix in a single pass over the points, shifted by the
  * first point so that the sums of squares do not cancel catastrophically far from the
  * origin. Line and plane fits take the principal directions of this matrix
- * (Shakarji, J. Res. NIST 103 (1998) §3: centroid plus singular vectors).
+ * (Shakarji, J. Res. NIST 103 (1998) §3: centroid plus singular vectors). Large sets are
+ * summed in WebAssembly SIMD (scatter-simd.ts), small ones in the loop below.
  */
 import { symmetricEigen } from './linalg';
+import { shiftedSumsSimd } from './scatter-simd';
 import type { Vec3 } from '../geometry/vec3';
+
+/** From this many points the sums run in WebAssembly SIMD (below it the copy costs more than it saves). */
+export const SIMD_MIN_POINTS = 8192;
 
 export interface Scatter {
   count: number;
@@ -14,14 +19,16 @@ export interface Scatter {
   matrix: number[];
 }
 
-/** Scatter of points stored flat as x0 y0 z0 x1 y1 z1 … (the fast path). */
+/** Scatter of points stored flat as x0 y0 z0 x1 y1 z1 … (the fast path; SIMD for large sets). */
 export function scatterFlat(xyz: Float64Array): Scatter {
   const n = Math.floor(xyz.length / 3);
   const ox = xyz[0] ?? 0;
   const oy = xyz[1] ?? 0;
   const oz = xyz[2] ?? 0;
   let sx = 0, sy = 0, sz = 0, sxx = 0, sxy = 0, sxz = 0, syy = 0, syz = 0, szz = 0;
-  for (let i = 0; i < 3 * n; i += 3) {
+  const simd = n >= SIMD_MIN_POINTS ? shiftedSumsSimd(xyz, n, ox, oy, oz) : null;
+  if (simd) [sx, sy, sz, sxx, sxy, sxz, syy, syz, szz] = simd;
+  else for (let i = 0; i < 3 * n; i += 3) {
     const x = (xyz[i] as number) - ox;
     const y = (xyz[i + 1] as number) - oy;
     const z = (xyz[i + 2] as number) - oz;
