@@ -9,8 +9,8 @@
  * at the measuring feed ending at `end`, the TRIP record, a retract to the start, and
  * protected moves back up to the safe plane.
  */
-import { partToMachine } from '../kinematics/forward';
-import { linearMapFor } from '../kinematics/inverse';
+import { partToMachineWith } from '../kinematics/forward';
+import { linearMapFor, rotarySetting } from '../kinematics/inverse';
 import { prepareMachine, rotaryValues, type PreparedMachine } from '../kinematics/machine';
 import type { AxisValues, Machine } from '../kinematics/schema';
 import type { Feature, Part, Probe } from '../features/schema';
@@ -85,6 +85,7 @@ export function buildProgram(plan: Plan, part: Part, probe: Probe, machine: Mach
     const path = featurePath(f, run.map((tp) => tp.start), clearances.get(f.uuid) ?? probe.clearance, t, safeH);
     steps.push({ kind: 'feature', label: f.label, type: f.type, points: run.length });
     const linear = linearMapFor(pm, r);
+    const tables = rotarySetting(pm, r).tables;
     const safeIn = linear(path.safeIn);
     if (!sameRotaries(rot, r)) {
       if (pm.rotaries.length > 0 || at === null) steps.push({ kind: 'rapid', to: { Z: zTop } });
@@ -105,7 +106,7 @@ export function buildProgram(plan: Plan, part: Part, probe: Probe, machine: Mach
       protectedTo(start);
       const end = linear(tp.end);
       steps.push({ kind: 'touch', to: end, feed: probe.fastFeed, pass: 'fast' });
-      const n = partToMachine(pm, r, tp.normal, true);
+      const n = partToMachineWith(pm, tables, tp.normal, true);
       steps.push({ kind: 'backoff', by: { X: n[0] * back, Y: n[1] * back, Z: n[2] * back }, feed: probe.fastFeed });
       steps.push({ kind: 'touch', to: end, feed: probe.measureFeed, pass: 'slow' });
       steps.push({ kind: 'record', uuid: tp.uuid });
