@@ -10,8 +10,9 @@
  * protected moves back up to the safe plane.
  */
 import { partToMachineWith } from '../kinematics/forward';
-import { linearMapFor, rotarySetting } from '../kinematics/inverse';
+import { linearAxesMap, linearAxisOf, rotarySetting } from '../kinematics/inverse';
 import { prepareMachine, rotaryValues, type PreparedMachine } from '../kinematics/machine';
+import { distance, type Vec3 } from '../geometry/vec3';
 import type { AxisValues, Machine } from '../kinematics/schema';
 import type { Feature, Part, Probe } from '../features/schema';
 import { featureAxis } from '../features/feature-geometry';
@@ -23,11 +24,12 @@ export type Step =
   | { kind: 'feature'; label: string; type: Feature['type']; points: number }
   | { kind: 'rapid'; to: AxisValues }
   | { kind: 'rotary'; to: AxisValues }
-  | { kind: 'protected'; to: AxisValues; feed: number }
-  | { kind: 'touch'; to: AxisValues; feed: number; pass: 'fast' | 'slow' }
-  | { kind: 'backoff'; by: AxisValues; feed: number }
+  // machine X, Y, Z of the linear moves (every axis given)
+  | { kind: 'protected'; to: Vec3; feed: number }
+  | { kind: 'touch'; to: Vec3; feed: number; pass: 'fast' | 'slow' }
+  | { kind: 'backoff'; by: Vec3; feed: number }
   | { kind: 'record'; uuid: string }
-  | { kind: 'retract'; to: AxisValues; feed: number };
+  | { kind: 'retract'; to: Vec3; feed: number };
 
 export interface NeutralProgram {
   steps: Step[];
@@ -55,8 +57,6 @@ function runs(points: TouchPoint[]): TouchPoint[][] {
 }
 
 const sameRotaries = (a: AxisValues | null, b: AxisValues): boolean => a !== null && Object.keys(b).every((k) => Math.abs((a[k] ?? 0) - (b[k] ?? 0)) < 1e-9);
-/** Distance between two linear positions (mm). */
-const gapOf = (a: AxisValues, b: AxisValues): number => Math.hypot((a.X ?? 0) - (b.X ?? 0), (a.Y ?? 0) - (b.Y ?? 0), (a.Z ?? 0) - (b.Z ?? 0));
 
 export function buildProgram(plan: Plan, part: Part, probe: Probe, machine: Machine | PreparedMachine): NeutralProgram {
   const pm = prepareMachine(machine);
@@ -65,10 +65,10 @@ export function buildProgram(plan: Plan, part: Part, probe: Probe, machine: Mach
   const clearances = partClearances(part, probe);
   const safeByAxis = new Map<string, number>();
   const steps: Step[] = [];
-  let at: AxisValues | null = null;
+  let at: Vec3 | null = null;
   let rot: AxisValues | null = null;
-  const protectedTo = (to: AxisValues) => {
-    if (at && gapOf(at, to) < MIN_PROBE_MOVE_MM) return;
+  const protectedTo = (to: Vec3) => {
+    if (at && distance(at, to) < MIN_PROBE_MOVE_MM) return;
     steps.push({ kind: 'protected', to, feed: probe.fastFeed });
     at = to;
   };
@@ -84,30 +84,31 @@ export function buildProgram(plan: Plan, part: Part, probe: Probe, machine: Mach
     safeByAxis.set(key, safeH);
     const path = featurePath(f, run.map((tp) => tp.start), clearances.get(f.uuid) ?? probe.clearance, t, safeH);
     steps.push({ kind: 'feature', label: f.label, type: f.type, points: run.length });
-    const linear = linearMapFor(pm, r);
+    const map = linearAxesMap(pm, r);
+    const linear = (p: Vec3): Vec3 => [linearAxisOf(map, p, 0), linearAxisOf(map, p, 1), linearAxisOf(map, p, 2)];
     const tables = rotarySetting(pm, r).tables;
     const safeIn = linear(path.safeIn);
     if (!sameRotaries(rot, r)) {
       if (pm.rotaries.length > 0 || at === null) steps.push({ kind: 'rapid', to: { Z: zTop } });
       if (pm.rotaries.length > 0) steps.push({ kind: 'rotary', to: r });
-      steps.push({ kind: 'rapid', to: { X: safeIn.X!, Y: safeIn.Y!, Z: zTop } });
+      steps.push({ kind: 'rapid', to: { X: safeIn[0], Y: safeIn[1], Z: zTop } });
       rot = r;
     }
-    steps.push({ kind: 'rapid', to: safeIn });
+    steps.push({ kind: 'rapid', to: { X: safeIn[0], Y: safeIn[1], Z: safeIn[2] } });
     at = safeIn;
     protectedTo(linear(path.entry));
     const back = backoffDistance(probe);
     run.forEach((tp, i) => {
       for (const b of path.before[i] ?? []) protectedTo(linear(b));
       const start = linear(tp.start);
-      const gap = at ? gapOf(at, start) : Infinity;
+      const gap = at ? distance(at, start) : Infinity;
       // starts closer than a probe move allows (e.g. a pair across a narrow slot): go via a point 1 mm up the axis
       if (gap >= 1e-9 && gap < MIN_PROBE_MOVE_MM) protectedTo(linear([tp.start[0] + t[0], tp.start[1] + t[1], tp.start[2] + t[2]]));
       protectedTo(start);
       const end = linear(tp.end);
       steps.push({ kind: 'touch', to: end, feed: probe.fastFeed, pass: 'fast' });
       const n = partToMachineWith(pm, tables, tp.normal, true);
-      steps.push({ kind: 'backoff', by: { X: n[0] * back, Y: n[1] * back, Z: n[2] * back }, feed: probe.fastFeed });
+      steps.push({ kind: 'backoff', by: [n[0] * back, n[1] * back, n[2] * back], feed: probe.fastFeed });
       steps.push({ kind: 'touch', to: end, feed: probe.measureFeed, pass: 'slow' });
       steps.push({ kind: 'record', uuid: tp.uuid });
       steps.push({ kind: 'retract', to: start, feed: probe.fastFeed });

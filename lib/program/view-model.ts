@@ -4,6 +4,7 @@
  * partial that renders it.
  */
 import type { Part, Probe } from '../features/schema';
+import type { Vec3 } from '../geometry/vec3';
 import type { AxisValues, Machine } from '../kinematics/schema';
 import { SAFETY_CAUTIONS, SAFETY_HEADLINE } from '../packaging/cautions';
 import { commentLines, fixed } from './format';
@@ -93,15 +94,15 @@ export function buildView(def: PostDefinition, prog: NeutralProgram, part: Part,
   const recordParts = def.trip.record.split('{uuid}').map((p) => fill(p, { values }));
   // steps share their target objects (a touch's end for both passes, a start for its
   // retract): the last two targets are formatted once
-  type Words = { to: AxisValues | null; words: string; x: string; y: string; z: string };
+  type Words = { to: Vec3 | null; words: string; x: string; y: string; z: string };
   let recent: Words = { to: null, words: '', x: '', y: '', z: '' };
   let older: Words = recent;
-  const target = (to: AxisValues): Words => {
+  const target = (to: Vec3): Words => {
     if (to === recent.to) return recent;
     if (to !== older.to) {
-      const x = fixed(to.X ?? 0, dl);
-      const y = fixed(to.Y ?? 0, dl);
-      const z = fixed(to.Z ?? 0, dl);
+      const x = fixed(to[0], dl);
+      const y = fixed(to[1], dl);
+      const z = fixed(to[2], dl);
       older = { to, words: `X${x} Y${y} Z${z}`, x, y, z };
     }
     [recent, older] = [older, recent];
@@ -112,7 +113,7 @@ export function buildView(def: PostDefinition, prog: NeutralProgram, part: Part,
       case 'feature': return block(s.kind, '', '', '', '', '', '', commentLines(`Feature ${s.label} ${s.type}, ${s.points} points`, def)[0]);
       case 'rapid': return block(s.kind, lin(s.to));
       case 'rotary': return block(s.kind, rot(s.to));
-      case 'backoff': return block(s.kind, lin(s.by), feed(s.feed));
+      case 'backoff': return block(s.kind, `X${fixed(s.by[0], dl)} Y${fixed(s.by[1], dl)} Z${fixed(s.by[2], dl)}`, feed(s.feed));
       case 'record': return block(s.kind, '', '', '', '', '', recordParts.join(def.trip.uuidCase === 'upper' ? s.uuid.toUpperCase() : s.uuid));
       default: {
         const w = target(s.to);
