@@ -190,12 +190,6 @@ export const linearAxisAt = (m: LinearAxesMap, x: number, y: number, z: number, 
 /** Linear axis `k` (0 = X, 1 = Y, 2 = Z) of part-frame tip `p` under a `linearAxesMap`. */
 export const linearAxisOf = (m: LinearAxesMap, p: Vec3, k: 0 | 1 | 2): number => linearAxisAt(m, p[0], p[1], p[2], k);
 
-/** `linearAxesFor` at fixed rotary angles as a function for many points (see `linearAxesMap`). */
-export function linearMapFor(machine: Machine | PreparedMachine, rotaries: AxisValues): (tipP: Vec3) => { X: number; Y: number; Z: number } {
-  const m = linearAxesMap(machine, rotaries);
-  return (p) => ({ X: linearAxisOf(m, p, 0), Y: linearAxisOf(m, p, 1), Z: linearAxisOf(m, p, 2) });
-}
-
 /** Every angle equivalent to `raw` that the rotary may take (nearest `prev` when continuous). */
 export function equivalentAngles(r: PreparedRotary, raw: number, prev: number, free: boolean): number[] {
   if (r.min === null || r.max === null) return [free ? raw : prev + wrapDeg(raw - prev)];
