@@ -1,21 +1,28 @@
 /**
- * `npm run bench`: runs every `tests/bench/*.bench.ts` module in turn (each exports a
- * default async function that measures and prints its own figures beside a floor
- * measured in the same run). A benchmark, not a test: it asserts nothing and is not
- * part of `npm test`.
+ * `npm run bench [name]`: runs every benchmark (or those whose name contains `name`), each
+ * in a process of its own so that one's heap does not slow the next; each measures and
+ * prints its own figures beside a floor measured in the same process. A benchmark, not a
+ * test: it asserts nothing and is not part of `npm test`. Bundled first (bundle.ts); a new
+ * `*.bench.ts` is added to the list below.
  */
-import { readdirSync } from 'node:fs';
-import { dirname, join } from 'node:path';
-import { fileURLToPath, pathToFileURL } from 'node:url';
+import { spawnSync } from 'node:child_process';
+import { fileURLToPath } from 'node:url';
+import evaluate from './evaluate.bench';
+import generate from './generate.bench';
 
-const here = dirname(fileURLToPath(import.meta.url));
-const only = process.argv[2];
-const files = readdirSync(here)
-  .filter((f) => f.endsWith('.bench.ts') && (!only || f.includes(only)))
-  .sort();
+const benches: [string, () => Promise<void>][] = [
+  ['evaluate.bench.ts', evaluate],
+  ['generate.bench.ts', generate],
+];
 
-for (const file of files) {
-  console.log(`\n== ${file} ==`);
-  const mod = (await import(pathToFileURL(join(here, file)).href)) as { default: () => Promise<void> };
-  await mod.default();
+const [only, inProcess] = [process.argv[2], process.argv[3] === '--here'];
+for (const [name, run] of benches) {
+  if (only && !name.includes(only)) continue;
+  if (inProcess) {
+    await run();
+    continue;
+  }
+  console.log(`\n== ${name} ==`);
+  const child = spawnSync(process.execPath, [fileURLToPath(import.meta.url), name, '--here'], { stdio: 'inherit' });
+  if (child.status !== 0) process.exitCode = child.status ?? 1;
 }
