@@ -12,7 +12,6 @@ import { capability, type Capability } from '../capability/risk';
 import type { TemperatureCorrection } from '../capability/temperature';
 import { uncertaintyBudget, type UncertaintyBudget } from '../capability/uncertainty';
 import { FitError } from '../fitting/types';
-import type { Vec3 } from '../geometry/vec3';
 import { notEvaluated, type EvalContext, type MeasurementOrError, type RawResult } from './context';
 import { evaluateForm, evaluateOrientation, evaluateProfile } from './form-orientation';
 import type { EvaluateInput } from './input';
@@ -21,22 +20,16 @@ import { summariseFeature, type FeatureSummary } from './feature-summary';
 import { evaluatePosition, evaluateSize } from './size-position';
 import { proposeCorrections, type Corrections } from './corrections';
 
-export interface ResultRecord {
+/** What a result carries over from its characteristic's raw evaluation, as it was computed. */
+type Carried = Pick<RawResult, 'value' | 'lower' | 'upper' | 'bonus' | 'virtualCondition' | 'materialCondition' | 'nominal' | 'deviation' | 'deviations'>;
+
+export interface ResultRecord extends Carried {
   toleranceUuid: string;
   featureUuid: string;
   label: string;
   characteristic: Characteristic;
-  value: number | null;
   /** Geometric: the zone (with bonus); size and unequal profile: [lower, upper]. */
   limit: number | [number, number] | null;
-  lower: number | null;
-  upper: number | null;
-  bonus?: number;
-  virtualCondition?: number;
-  materialCondition?: 'MMC' | 'LMC' | 'RFS';
-  nominal?: number;
-  deviation?: Vec3;
-  deviations?: { min: number; max: number };
   status: Status;
   message?: string;
   uncertainty: UncertaintyBudget | null;

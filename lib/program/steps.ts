@@ -9,8 +9,8 @@
  * at the measuring feed ending at `end`, the TRIP record, a retract to the start, and
  * protected moves back up to the safe plane.
  */
-import { partToMachineWith } from '../kinematics/forward';
-import { linearAxesMap, linearAxisOf, rotarySetting } from '../kinematics/inverse';
+import { partToMachineWith, rotationsAt } from '../kinematics/forward';
+import { linearAxesMap, linearAxisOf } from '../kinematics/inverse';
 import { prepareMachine, rotaryValues, type PreparedMachine } from '../kinematics/machine';
 import { distance, type Vec3 } from '../geometry/vec3';
 import type { AxisValues, Machine } from '../kinematics/schema';
@@ -86,7 +86,7 @@ export function buildProgram(plan: Plan, part: Part, probe: Probe, machine: Mach
     steps.push({ kind: 'feature', label: f.label, type: f.type, points: run.length });
     const map = linearAxesMap(pm, r);
     const linear = (p: Vec3): Vec3 => [linearAxisOf(map, p, 0), linearAxisOf(map, p, 1), linearAxisOf(map, p, 2)];
-    const tables = rotarySetting(pm, r).tables;
+    const tables = rotationsAt(pm.tables, r);
     const safeIn = linear(path.safeIn);
     if (!sameRotaries(rot, r)) {
       if (pm.rotaries.length > 0 || at === null) steps.push({ kind: 'rapid', to: { Z: zTop } });
